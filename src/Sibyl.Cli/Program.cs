@@ -1,0 +1,1 @@
+return Sibyl.Cli.Entry.Run(args);
