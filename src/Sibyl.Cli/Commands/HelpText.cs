@@ -1,0 +1,58 @@
+using System.Globalization;
+using System.Text;
+using Sibyl.Cosmology.Parameters;
+
+namespace Sibyl.Cli.Commands;
+
+/// <summary>Help texts; parameter lists come from the catalog so they never drift from the code.</summary>
+internal static class HelpText
+{
+    public const string Usage = """
+        usage: sibyl <command> [arguments]
+
+        commands:
+          compute linear [name=value ...] [options]   linear spectrum P_lin and its no-wiggle partner P_nw
+          compute matter [name=value ...] [options]   one-loop real-space matter spectrum, IR-resummed
+
+        sibyl compute --help lists every parameter with its default, range and unit.
+        """;
+
+    public static string Compute()
+    {
+        var text = new StringBuilder();
+        text.Append("""
+            usage: sibyl compute linear|matter [name=value ...] [options]
+
+            Writes a CSV (header row, invariant culture, round-trip precision) to stdout or --out;
+            growth D, f and sigma8 at z go to stderr. Units: k in h/Mpc, P in (Mpc/h)^3.
+
+            parameters (name=value; defaults in brackets):
+            """);
+        text.Append('\n');
+        foreach (var d in ParameterCatalog.All.Append(ParameterCatalog.Redshift))
+        {
+            string value = double.IsNaN(d.Default) ? "unset" : d.Default.ToString("G", CultureInfo.InvariantCulture);
+            string unit = d.Unit.Length > 0 ? " " + d.Unit : "";
+            text.Append(CultureInfo.InvariantCulture, $"  {d.Name,-10} [{value}{unit}] in {d.Range}: {d.Meaning}\n");
+        }
+
+        text.Append(CultureInfo.InvariantCulture, $"  {ParameterCatalog.ModelName,-10} [lcdm] one of {string.Join(", ", ParameterCatalog.Models.Keys)}\n");
+        text.Append(CultureInfo.InvariantCulture, $$"""
+
+            compute matter also takes:
+              cs2        [0 (Mpc/h)^2] in [-1000, 1000]: EFT counterterm, adds -2 cs2 k^2 P_IR
+
+            options:
+              --kmin K   [{{PointArguments.DefaultKMin:G}}] smallest output k, h/Mpc
+              --kmax K   [{{PointArguments.DefaultKMax:G}}] largest output k, h/Mpc
+              --nk N     [{{PointArguments.DefaultKCount}}] number of log-spaced k values
+              --table F  linear P(k) at z = 0 of the GR counterpart, two columns k, P (replaces the fit;
+                         its amplitude replaces ln10As/sigma8; never extrapolated)
+              --out F    write the CSV to F (atomically) instead of stdout
+              --plot F   also write a PNG figure to F
+              --help     this text
+
+            """);
+        return text.ToString();
+    }
+}

@@ -1,0 +1,55 @@
+using Sibyl.Cli.Arguments;
+using Sibyl.Cosmology;
+using Sibyl.Cosmology.Parameters;
+
+namespace Sibyl.Cli.Commands;
+
+/// <summary>The cosmology, redshift and k grid shared by every <c>compute</c> output.</summary>
+internal sealed record PointArguments(CosmologyModel Model, double Redshift, double[] K)
+{
+    public const double DefaultKMin = 1e-3, DefaultKMax = 1.0;
+    public const int DefaultKCount = 200;
+
+    public static PointArguments Parse(CommandArguments args)
+    {
+        args.MarkUsed(ParameterCatalog.All.Select(d => d.Name).Append(ParameterCatalog.ModelName).Append(ParameterCatalog.Redshift.Name));
+        var parameters = ParameterCatalog.Build(args.Parameters);
+        double z = args.Parameters.TryGetValue(ParameterCatalog.Redshift.Name, out var zText)
+            ? ParameterCatalog.Redshift.Check(ParameterCatalog.ParseNumber(ParameterCatalog.Redshift.Name, zText))
+            : ParameterCatalog.Redshift.Default;
+
+        double kMin = args.NumberOption("kmin", DefaultKMin, 1e-5, 100);
+        double kMax = args.NumberOption("kmax", DefaultKMax, 1e-5, 100);
+        int count = args.IntegerOption("nk", DefaultKCount, 4, 100_000);
+        if (!(kMax > kMin))
+        {
+            throw new UsageException($"--kmax: must exceed --kmin ({kMin})");
+        }
+
+        string? table = args.Option("table");
+        CosmologyModel model;
+        if (table is null)
+        {
+            model = CosmologyModel.Create(parameters);
+        }
+        else
+        {
+            var (k, p) = LinearTableReader.Read(table);
+            try
+            {
+                model = CosmologyModel.CreateFromTable(parameters, k, p);
+            }
+            catch (ArgumentException e) when (e is not ParameterOutOfRangeException)
+            {
+                throw new UsageException($"--table: {table}: {e.Message}");
+            }
+
+            if (kMin < model.Linear.KMin || kMax > model.Linear.KMax)
+            {
+                throw new UsageException($"--kmin/--kmax: the table covers k in [{model.Linear.KMin:G6}, {model.Linear.KMax:G6}] h/Mpc; ask for k inside it");
+            }
+        }
+
+        return new PointArguments(model, z, Cosmology.Linear.LogGridFunction.LogGrid(kMin, kMax, count));
+    }
+}
