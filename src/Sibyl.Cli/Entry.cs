@@ -10,6 +10,9 @@ internal static class Entry
     /// <summary>Bad input.</summary>
     public const int UsageError = 2;
 
+    /// <summary>A file could not be read or written.</summary>
+    public const int IoError = 1;
+
     /// <summary>Runs the command line and returns the process exit code.</summary>
     public static int Run(string[] args) => Run(args, Console.Out, Console.Error);
 
@@ -34,6 +37,11 @@ internal static class Entry
         {
             stderr.WriteLine($"sibyl: {e.Message.Split(" (Parameter '")[0]}");
             return UsageError;
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+            stderr.WriteLine($"sibyl: {e.Message}");
+            return IoError;
         }
     }
 

@@ -20,7 +20,7 @@ internal sealed record PointArguments(CosmologyModel Model, double Redshift, dou
 
         double kMin = args.NumberOption("kmin", DefaultKMin, 1e-5, 100);
         double kMax = args.NumberOption("kmax", DefaultKMax, 1e-5, 100);
-        int count = args.IntegerOption("nk", DefaultKCount, 4, 100_000);
+        int count = args.IntegerOption("nk", DefaultKCount, 2, 100_000);
         if (!(kMax > kMin))
         {
             throw new UsageException($"--kmax: must exceed --kmin ({kMin})");

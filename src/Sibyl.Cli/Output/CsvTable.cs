@@ -49,8 +49,9 @@ internal sealed class CsvTable(IReadOnlyList<string> columns)
     {
         AtomicFile.Write(path, stream =>
         {
-            using var writer = new StreamWriter(stream, new UTF8Encoding(false));
+            using var writer = new StreamWriter(stream, new UTF8Encoding(false), bufferSize: -1, leaveOpen: true);
             Write(writer);
+            writer.Flush();
         });
     }
 }

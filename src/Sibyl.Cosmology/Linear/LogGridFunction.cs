@@ -97,7 +97,7 @@ public sealed class LogGridFunction
     }
 
     /// <summary>The grid points k_i, log-spaced from kMin to kMax inclusive.</summary>
-    /// <exception cref="ArgumentOutOfRangeException">Bounds not positive and increasing, or fewer than 4 points.</exception>
+    /// <exception cref="ArgumentOutOfRangeException">Bounds not positive and increasing, or fewer than 2 points.</exception>
     public static double[] LogGrid(double kMin, double kMax, int count)
     {
         if (!(kMin > 0.0 && kMax > kMin && double.IsFinite(kMax)))
@@ -105,7 +105,7 @@ public sealed class LogGridFunction
             throw new ArgumentOutOfRangeException(nameof(kMax), kMax, $"need 0 < kMin < kMax, got kMin = {kMin:G6}");
         }
 
-        ArgumentOutOfRangeException.ThrowIfLessThan(count, 4);
+        ArgumentOutOfRangeException.ThrowIfLessThan(count, 2);
         var grid = new double[count];
         double step = Math.Log(kMax / kMin) / (count - 1);
         for (int i = 0; i < count; i++)

@@ -10,10 +10,14 @@ namespace Sibyl.Cosmology.Linear;
 public static class NoWiggleSplit
 {
     /// <summary>
-    /// Filter width in ln k. 0.5 damps a wiggle of period Δk = 2π/r_d ≈ 0.06 h/Mpc by a factor
-    /// exp(−(2π · 0.5 · k/Δk)²/2): below 1e-3 for k ≥ 0.04 h/Mpc, where the wiggles have any size.
+    /// Filter width in k, h/Mpc. A Gaussian of width σ damps a wiggle of period Δk = 2π/r_d ≈ 0.06 h/Mpc by
+    /// exp(−(2πσ/Δk)²/2), 2e-4 for σ = 0.04; a width fixed in k rather than in ln k keeps the filter
+    /// narrow where the broadband curves (k ≳ 0.2), so the smooth part follows the wiggles' midpoint.
     /// </summary>
-    public const double FilterWidth = 0.5;
+    public const double FilterWidthInK = 0.04;
+
+    /// <summary>Cap on the width in ln k, reached below k = 0.08 h/Mpc where the ratio is nearly flat.</summary>
+    public const double MaxFilterWidthInLnK = 0.5;
 
     /// <summary>Smoothing runs on every <c>Stride</c>-th grid point; the smoothed ratio is interpolated back.</summary>
     private const int Stride = 4;
@@ -40,7 +44,7 @@ public static class NoWiggleSplit
             coarseRatio[c] = Math.Log(spectrum.Values[i] / reference[i]);
         }
 
-        var smoothed = GaussianSmooth(coarseRatio, FilterWidth / (spectrum.LnStep * Stride));
+        var smoothed = GaussianSmooth(coarseRatio, spectrum.LnKMin, spectrum.LnStep * Stride);
         var coarse = new LogGridFunction(spectrum.LnKMin, spectrum.LnStep * Stride, Exponentiate(smoothed));
         double lastCoarseK = coarse.KMax;
         var result = new double[n];
@@ -53,27 +57,23 @@ public static class NoWiggleSplit
         return new LogGridFunction(spectrum.LnKMin, spectrum.LnStep, result);
     }
 
-    private static double[] GaussianSmooth(double[] values, double widthInPoints)
+    private static double[] GaussianSmooth(double[] values, double lnKMin, double lnStep)
     {
         int n = values.Length;
-        int half = (int)Math.Ceiling(4.0 * widthInPoints);
-        var weights = new double[2 * half + 1];
-        for (int j = -half; j <= half; j++)
-        {
-            weights[j + half] = Math.Exp(-0.5 * j * j / (widthInPoints * widthInPoints));
-        }
-
         var result = new double[n];
         for (int i = 0; i < n; i++)
         {
+            double k = Math.Exp(lnKMin + lnStep * i);
+            double width = Math.Min(MaxFilterWidthInLnK, FilterWidthInK / k) / lnStep;
+            int half = (int)Math.Ceiling(4.0 * width);
             double sum = 0.0, norm = 0.0;
             for (int j = -half; j <= half; j++)
             {
                 // The ratio is flat at both ends of the table (no wiggles far from the BAO scale),
                 // so holding the edge value is the right padding.
-                double v = values[Math.Clamp(i + j, 0, n - 1)];
-                sum += weights[j + half] * v;
-                norm += weights[j + half];
+                double weight = Math.Exp(-0.5 * j * j / (width * width));
+                sum += weight * values[Math.Clamp(i + j, 0, n - 1)];
+                norm += weight;
             }
 
             result[i] = sum / norm;
