@@ -1,5 +1,4 @@
 using Sibyl.Cli.Arguments;
-using Sibyl.Cli.Output;
 
 namespace Sibyl.Cli.Commands;
 
@@ -18,33 +17,41 @@ internal static class ComputeCommand
 
         var arguments = new CommandArguments(args[1..], Flags);
         string? outPath = arguments.Option("out");
-        CsvTable table;
-        string summary;
-        switch (args[0])
+        string? plotPath = arguments.Option("plot");
+        if (plotPath is not null && !plotPath.EndsWith(".png", StringComparison.OrdinalIgnoreCase))
         {
-            case "linear":
-            {
-                var point = PointArguments.Parse(arguments);
-                arguments.RejectUnused("see sibyl compute --help");
-                table = ComputeLinear.Table(point);
-                summary = ComputeLinear.Summary(point);
-                break;
-            }
-
-            default:
-                throw new UsageException($"compute: unknown output '{args[0]}'; expected linear or matter");
+            throw new UsageException($"--plot: '{plotPath}' must end in .png");
         }
 
-        stderr.WriteLine(summary);
+        ComputeResult result = args[0] switch
+        {
+            "linear" => ComputeLinear.Run(Parse(arguments)),
+            _ => throw new UsageException($"compute: unknown output '{args[0]}'; expected linear or matter"),
+        };
+
+        stderr.WriteLine(result.Summary);
         if (outPath is null)
         {
-            table.Write(stdout);
+            result.Table.Write(stdout);
         }
         else
         {
-            table.WriteFile(outPath);
+            result.Table.WriteFile(outPath);
+        }
+
+        if (plotPath is not null)
+        {
+            result.Figure.Save(plotPath);
+            stderr.WriteLine($"figure written to {plotPath}");
         }
 
         return 0;
+    }
+
+    private static PointArguments Parse(CommandArguments arguments)
+    {
+        var point = PointArguments.Parse(arguments);
+        arguments.RejectUnused("see sibyl compute --help");
+        return point;
     }
 }
