@@ -3,8 +3,9 @@ namespace Sibyl.Perturbation.TimeDependence;
 /// <summary>
 /// The momentum structures of the third-order density and velocity kernels that survive in P_13, named
 /// (outer vertex)(inner second-order kernel): alpha, beta are the fluid mode couplings, gamma = 1 − μ² the
-/// Galileon one. A sixth structure, alpha(q, k−q) ⊗ gamma, integrates to zero over angles for P_13
-/// (its integrand is odd in k̂·q̂), so it is not carried. Derivation in DEVELOPERS.md ("Perturbation theory").
+/// Galileon one. The last, <see cref="AlphaGammaOdd"/>, integrates to zero over angles in every P_13-type
+/// term (its integrand is odd in k̂·q̂) but belongs to the full kernel F3(k1, k2, k3).
+/// Derivation in DEVELOPERS.md ("Perturbation theory").
 /// </summary>
 public enum ThirdOrderStructure
 {
@@ -25,4 +26,7 @@ public enum ThirdOrderStructure
 
     /// <summary>Galileon vertex gamma on the gamma part of δ2 and the cubic vertex (modified gravity only).</summary>
     GammaGamma,
+
+    /// <summary>Continuity vertex alpha(k1, k23) on the gamma part of δ2; zero in P_13.</summary>
+    AlphaGammaOdd,
 }

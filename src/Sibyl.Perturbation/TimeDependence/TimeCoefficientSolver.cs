@@ -8,7 +8,7 @@ namespace Sibyl.Perturbation.TimeDependence;
 /// Solves the fluid equations order by order in ln a with the modified Poisson equation of
 /// <see cref="IGravityModel"/>: δ' − Θ = α[Θ, δ], Θ' + (2 + d ln H/d ln a) Θ − (3/2) Ω_m μ δ = β[Θ, Θ] + γ2 𝒩[δ, δ] + γ3 𝒩[δ, 𝒩[δ, δ]].
 /// Each kernel coefficient obeys the linear growth operator with a source built from lower orders, so
-/// one RK4 pass over 16 coupled equations gives all of them. It starts at a = 1e-3 on the
+/// one RK4 pass over 18 coupled equations gives all of them. It starts at a = 1e-3 on the
 /// Einstein–de Sitter solution (error there of order Ω_DE(1e-3) ≈ 1e-9 and, for nDGP, μ − 1 ≈ 1e-5 √Ω_rc,
 /// both decaying relative to the growing solution).
 /// </summary>
@@ -20,13 +20,13 @@ public static class TimeCoefficientSolver
     /// <summary>RK4 steps per e-fold; 100 keeps the truncation error of the a³ terms near 1e-7.</summary>
     public const int StepsPerEFold = 100;
 
-    private const int Structures = 6;
+    private const int Structures = 7;
     private const int Dimension = 4 + 2 * Structures;
 
     // Einstein–de Sitter growing solutions per a³: X = (sΘ + (7/2) sδ)/9 for sources sδ a³ in continuity
     // and sΘ a³ in Euler (from 3X − Y = sδ, (7/2)Y − (3/2)X = sΘ).
-    private static readonly double[] EdsDensity = [7.0 / 18.0, -2.0 / 9.0, 2.0 / 9.0, -8.0 / 63.0, 0.0, 0.0];
-    private static readonly double[] EdsContinuitySource = [1.0, -4.0 / 7.0, 0.0, 0.0, 0.0, 0.0];
+    private static readonly double[] EdsDensity = [7.0 / 18.0, -2.0 / 9.0, 2.0 / 9.0, -8.0 / 63.0, 0.0, 0.0, -1.0 / 9.0];
+    private static readonly double[] EdsContinuitySource = [1.0, -4.0 / 7.0, 0.0, 0.0, 0.0, 0.0, -2.0 / 7.0];
 
     /// <summary>Coefficients at every scale factor in <paramref name="scaleFactors"/> (any order, each in [0.01, 1]).</summary>
     /// <exception cref="ArgumentOutOfRangeException">A scale factor is outside [0.01, 1].</exception>
@@ -104,6 +104,7 @@ public static class TimeCoefficientSolver
         Span<double> euler = stackalloc double[Structures];
         continuity[(int)ThirdOrderStructure.AlphaAlpha] = dp * d * d;
         continuity[(int)ThirdOrderStructure.AlphaGamma] = d * bp;
+        continuity[(int)ThirdOrderStructure.AlphaGammaOdd] = dp * b;
         euler[(int)ThirdOrderStructure.BetaAlpha] = 2.0 * dp * dp * d;
         euler[(int)ThirdOrderStructure.BetaGamma] = 2.0 * dp * bp;
         euler[(int)ThirdOrderStructure.GammaAlpha] = 2.0 * gamma2 * d * d * d;

@@ -5,7 +5,7 @@ namespace Sibyl.Perturbation.TimeDependence;
 /// domination and ' = d/d ln a. Second order: F2 = D² alpha_s + B gamma, G2 = D D' alpha_s + B' gamma
 /// (velocity Θ = −∇·v/ℋ, so G = f F at linear order). Third order: F3 = Σ_s X_s M_s and G3 = Σ_s Y_s M_s
 /// over <see cref="ThirdOrderStructure"/>. Einstein–de Sitter: D = a, B = −(2/7)a², X_AlphaAlpha = (7/18)a³,
-/// X_AlphaGamma = −(2/9)a³, X_BetaAlpha = (2/9)a³, X_BetaGamma = −(8/63)a³.
+/// X_AlphaGamma = −(2/9)a³, X_BetaAlpha = (2/9)a³, X_BetaGamma = −(8/63)a³, X_AlphaGammaOdd = −(1/9)a³.
 /// </summary>
 public sealed class TimeCoefficients
 {
