@@ -1,7 +1,7 @@
 namespace Sibyl.Perturbation.Loops;
 
 /// <summary>
-/// Preallocated results of the one-loop momentum integrals at every k of a loop quadrature plan:
+/// Preallocated results of the one-loop momentum integrals at every k of a <see cref="LoopQuadrature"/>:
 /// the three P_22 integrals J_S(k) and the six P_13 integrals I_s(k), each an array over k.
 /// </summary>
 /// <remarks>J_S is in (Mpc/h)³ (it carries two powers of P and one of d³q); I_s is in (h/Mpc)³·(Mpc/h)³ = dimensionless.</remarks>

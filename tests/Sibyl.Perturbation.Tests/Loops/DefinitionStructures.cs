@@ -9,7 +9,14 @@ internal static class DefinitionStructures
     /// <summary>M_s(x, r) for P_13, structure index as in P13Structure.</summary>
     public static double P13(int structure, double x, double r)
     {
-        double p2 = 1.0 + (r * r) - (2.0 * r * x);
+        // p² = 1 + r² − 2rx, grouped so that rounding cannot make it vanish or go negative near x = r = 1.
+        double p2 = ((1.0 - r) * (1.0 - r)) + (2.0 * r * (1.0 - x));
+        if (p2 == 0.0)
+        {
+            // Only the single point x = r = 1, reached by rounding; it has zero measure.
+            return 0.0;
+        }
+
         double aA = x / r;
         double aB = (1.0 - (r * x)) / p2;
         double bO = ((r * x) - (r * r)) / (2.0 * r * r * p2);
