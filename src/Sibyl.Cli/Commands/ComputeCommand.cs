@@ -1,4 +1,6 @@
 using Sibyl.Cli.Arguments;
+using Sibyl.Cosmology.Parameters;
+using Sibyl.Perturbation.Matter;
 
 namespace Sibyl.Cli.Commands;
 
@@ -26,6 +28,7 @@ internal static class ComputeCommand
         ComputeResult result = args[0] switch
         {
             "linear" => ComputeLinear.Run(Parse(arguments)),
+            "matter" => ComputeMatter.Run(Parse(arguments, MatterLayout.SoundSpeedDefinition, out double cs2), cs2),
             _ => throw new UsageException($"compute: unknown output '{args[0]}'; expected linear or matter"),
         };
 
@@ -53,5 +56,14 @@ internal static class ComputeCommand
         var point = PointArguments.Parse(arguments);
         arguments.RejectUnused("see sibyl compute --help");
         return point;
+    }
+
+    private static PointArguments Parse(CommandArguments arguments, ParameterDefinition extra, out double value)
+    {
+        arguments.MarkUsed([extra.Name]);
+        value = arguments.Parameters.TryGetValue(extra.Name, out var text)
+            ? extra.Check(ParameterCatalog.ParseNumber(extra.Name, text))
+            : extra.Default;
+        return Parse(arguments);
     }
 }

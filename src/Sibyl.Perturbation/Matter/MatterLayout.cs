@@ -1,3 +1,4 @@
+using Sibyl.Cosmology.Parameters;
 using Sibyl.Perturbation.Spectra;
 
 namespace Sibyl.Perturbation.Matter;
@@ -10,6 +11,10 @@ public static class MatterLayout
 {
     /// <summary>Name of the counterterm parameter.</summary>
     public const string SoundSpeed = "cs2";
+
+    /// <summary>c_s² with its default and allowed range, for command lines and grid specs.</summary>
+    public static ParameterDefinition SoundSpeedDefinition { get; } =
+        new(SoundSpeed, 0.0, -1000.0, true, 1000.0, true, "(Mpc/h)^2", "EFT counterterm: adds -2 cs2 k^2 P_IR");
 
     /// <summary>Index of the resummed tree plus one-loop term.</summary>
     public const int TreePlusLoop = 0;
