@@ -46,4 +46,16 @@ public sealed class TimeCoefficients
 
     /// <summary>Third-order velocity coefficient Y_s.</summary>
     public double Velocity(ThirdOrderStructure structure) => _velocity[(int)structure];
+
+    /// <summary>
+    /// The same kernel shapes at a different amplitude: D, D' times <paramref name="scale"/>, B, B' times its
+    /// square and third order times its cube — how EdS kernels are used with a ΛCDM growth factor.
+    /// </summary>
+    internal static TimeCoefficients Scaled(TimeCoefficients c, double scale)
+    {
+        double s2 = scale * scale, s3 = s2 * scale;
+        return new TimeCoefficients(
+            c.ScaleFactor, c.D * scale, c.DPrime * scale, c.B * s2, c.BPrime * s2,
+            c._density.Select(x => x * s3).ToArray(), c._velocity.Select(x => x * s3).ToArray());
+    }
 }
