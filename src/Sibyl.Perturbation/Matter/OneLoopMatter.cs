@@ -87,8 +87,14 @@ public sealed class OneLoopMatter
     public MatterSpectrum Compute(CosmologyModel model, double z)
     {
         ArgumentNullException.ThrowIfNull(model);
-        var time = TimeCoefficientSolver.Solve(model.Background, model.Gravity, 1.0 / (1.0 + z));
-        return Evaluate(Prepare(model.Linear), time);
+        return Compute(Prepare(model.Linear), model, z);
+    }
+
+    /// <summary>Evaluates already prepared integrals for <paramref name="model"/> at redshift <paramref name="z"/> (in [0, 99]).</summary>
+    public MatterSpectrum Compute(PreparedShape shape, CosmologyModel model, double z)
+    {
+        ArgumentNullException.ThrowIfNull(model);
+        return Evaluate(shape, TimeCoefficientSolver.Solve(model.Background, model.Gravity, 1.0 / (1.0 + z)));
     }
 
     /// <summary>P_22 = D⁴ J_αα + 2 D² B J_αγ + B² J_γγ, of the shape.</summary>
