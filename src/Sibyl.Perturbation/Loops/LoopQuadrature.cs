@@ -52,7 +52,7 @@ public sealed class LoopQuadrature
         QMax = qMax;
         _k = k.ToArray();
         _grid = new ProductGrid(qMin, qMax);
-        _p13 = new P13WeightTable(_grid, _k);
+        _p13 = new P13WeightTable(_grid, _k, P13Kernels.Count, P13Kernels.Evaluate);
         _p22 = new P22BandTable(_grid, _k);
     }
 
@@ -110,14 +110,7 @@ public sealed class LoopQuadrature
         _p22.Accumulate(resampledFirst, resampledSecond, firstResult.AllP22, secondResult.AllP22);
     }
 
-    private void Resample(LogSampledSpectrum spectrum, Span<double> destination)
-    {
-        ReadOnlySpan<double> lnQ = _grid.LnQ;
-        for (int i = 0; i < destination.Length; i++)
-        {
-            destination[i] = spectrum.EvaluateInside(lnQ[i]);
-        }
-    }
+    private void Resample(LogSampledSpectrum spectrum, Span<double> destination) => _grid.Resample(spectrum, destination);
 
     private void ValidateInputs(LogSampledSpectrum spectrum, MomentumIntegrals result, string spectrumName, string resultName)
     {
@@ -140,7 +133,7 @@ public sealed class LoopQuadrature
         }
     }
 
-    private static void ValidateRange(double qMin, double qMax)
+    internal static void ValidateRange(double qMin, double qMax)
     {
         if (!double.IsFinite(qMin) || qMin <= 0.0)
         {
@@ -155,7 +148,7 @@ public sealed class LoopQuadrature
         }
     }
 
-    private static void ValidateWavenumbers(ReadOnlySpan<double> k, double qMin, double qMax)
+    internal static void ValidateWavenumbers(ReadOnlySpan<double> k, double qMin, double qMax)
     {
         if (k.IsEmpty)
         {

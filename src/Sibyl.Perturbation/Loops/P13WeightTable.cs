@@ -1,8 +1,9 @@
 namespace Sibyl.Perturbation.Loops;
 
 /// <summary>
-/// Precomputed product-integration weights of the six P_13 integrals on a <see cref="ProductGrid"/>:
-/// I_s(k) = Σ_i W_s,i(k)·P(q_i), exact for the grid's cubic interpolant of P.
+/// Precomputed product-integration weights of P_13-type integrals I_s(k) = (1/4π²)∫ dq q² K_s(q/k) P(q)
+/// on a <see cref="ProductGrid"/>: I_s(k) = Σ_i W_s,i(k)·P(q_i), exact for the grid's cubic interpolant of P.
+/// The angular kernels K_s are supplied by the caller (the six matter ones, or the redshift-space extras).
 /// </summary>
 /// <remarks>
 /// W_s,i(k) = (1/4π²)∫ du q³ K_s(q/k) φ_i(u) over the table range (u = ln q), integrated once per plan by
@@ -19,15 +20,20 @@ internal sealed class P13WeightTable
     private readonly double[] _weights;
     private readonly int _gridCount;
     private readonly int _kCount;
+    private readonly int _kernelCount;
 
-    public P13WeightTable(ProductGrid grid, ReadOnlySpan<double> k)
+    /// <summary>Writes K_s(r) for every kernel of a set into <c>values</c>; r = q/k &gt; 0.</summary>
+    public delegate void RadialKernels(double r, Span<double> values);
+
+    public P13WeightTable(ProductGrid grid, ReadOnlySpan<double> k, int kernelCount, RadialKernels evaluate)
     {
         _gridCount = grid.Count;
         _kCount = k.Length;
-        _weights = new double[_kCount * P13Kernels.Count * _gridCount];
+        _kernelCount = kernelCount;
+        _weights = new double[_kCount * kernelCount * _gridCount];
         var rule = GaussLegendreRule.Create(NodesPerPanel);
         var breakpoints = new List<double>();
-        Span<double> kernels = stackalloc double[P13Kernels.Count];
+        Span<double> kernels = stackalloc double[kernelCount];
         Span<double> basis = stackalloc double[4];
         double lnMin = grid.LnQ[0];
         double lnMax = grid.LnQ[^1];
@@ -51,7 +57,7 @@ internal sealed class P13WeightTable
 
             breakpoints.RemoveAll(u => u < lnMin || u > lnMax);
             breakpoints.Sort();
-            Span<double> row = _weights.AsSpan(kIndex * P13Kernels.Count * _gridCount, P13Kernels.Count * _gridCount);
+            Span<double> row = _weights.AsSpan(kIndex * _kernelCount * _gridCount, _kernelCount * _gridCount);
             for (int b = 0; b + 1 < breakpoints.Count; b++)
             {
                 double a = breakpoints[b];
@@ -68,10 +74,10 @@ internal sealed class P13WeightTable
                 {
                     double u = a + (half * (rule.Nodes[n] + 1.0));
                     double q = Math.Exp(u);
-                    P13Kernels.Evaluate(q / k[kIndex], kernels);
+                    evaluate(q / k[kIndex], kernels);
                     grid.Basis(cell, u, basis);
                     double measure = half * rule.Weights[n] * q * q * q * Normalisation;
-                    for (int s = 0; s < P13Kernels.Count; s++)
+                    for (int s = 0; s < _kernelCount; s++)
                     {
                         double value = measure * kernels[s];
                         int rowStart = (s * _gridCount) + first;
@@ -94,9 +100,9 @@ internal sealed class P13WeightTable
         ReadOnlySpan<double> weights = _weights;
         for (int kIndex = 0; kIndex < _kCount; kIndex++)
         {
-            for (int s = 0; s < P13Kernels.Count; s++)
+            for (int s = 0; s < _kernelCount; s++)
             {
-                ReadOnlySpan<double> row = weights.Slice(((kIndex * P13Kernels.Count) + s) * _gridCount, _gridCount);
+                ReadOnlySpan<double> row = weights.Slice(((kIndex * _kernelCount) + s) * _gridCount, _gridCount);
                 integrals[(s * _kCount) + kIndex] = VectorDot.Dot(row, spectrum);
             }
         }
@@ -108,9 +114,9 @@ internal sealed class P13WeightTable
         ReadOnlySpan<double> weights = _weights;
         for (int kIndex = 0; kIndex < _kCount; kIndex++)
         {
-            for (int s = 0; s < P13Kernels.Count; s++)
+            for (int s = 0; s < _kernelCount; s++)
             {
-                ReadOnlySpan<double> row = weights.Slice(((kIndex * P13Kernels.Count) + s) * _gridCount, _gridCount);
+                ReadOnlySpan<double> row = weights.Slice(((kIndex * _kernelCount) + s) * _gridCount, _gridCount);
                 (double a, double b) = VectorDot.Dot2(row, first, second);
                 firstIntegrals[(s * _kCount) + kIndex] = a;
                 secondIntegrals[(s * _kCount) + kIndex] = b;

@@ -130,4 +130,14 @@ internal sealed class ProductGrid
         basis[2] = d0 * d1 * d3 * _denominators[offset + 2];
         basis[3] = d0 * d1 * d2 * _denominators[offset + 3];
     }
+
+    /// <summary>Samples <paramref name="spectrum"/> at the grid nodes (the input of every product-integration table).</summary>
+    public void Resample(LogSampledSpectrum spectrum, Span<double> destination)
+    {
+        ReadOnlySpan<double> lnQ = _u;
+        for (int i = 0; i < destination.Length; i++)
+        {
+            destination[i] = spectrum.EvaluateInside(lnQ[i]);
+        }
+    }
 }

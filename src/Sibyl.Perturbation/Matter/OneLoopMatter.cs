@@ -110,23 +110,13 @@ public sealed class OneLoopMatter
     private static double P13(MomentumIntegrals integrals, TimeCoefficients t, int i, double shapeAtK)
     {
         double sum = 0.0;
-        foreach (var s in Structures)
+        foreach (var s in P13TimeStructures.Pairs)
         {
             sum += t.Density(s.Time) * integrals[s.Loop][i];
         }
 
         return 4.0 * t.D * shapeAtK * sum;
     }
-
-    private static readonly (ThirdOrderStructure Time, P13Structure Loop)[] Structures =
-    [
-        (ThirdOrderStructure.AlphaAlpha, P13Structure.AlphaAlpha),
-        (ThirdOrderStructure.AlphaGamma, P13Structure.AlphaGamma),
-        (ThirdOrderStructure.BetaAlpha, P13Structure.BetaAlpha),
-        (ThirdOrderStructure.BetaGamma, P13Structure.BetaGamma),
-        (ThirdOrderStructure.GammaAlpha, P13Structure.GammaAlpha),
-        (ThirdOrderStructure.GammaGamma, P13Structure.GammaGamma),
-    ];
 
     private static LogSampledSpectrum Sample(LogGridFunction f) => new(f.Values, f.KMin, f.KMax);
 }
