@@ -11,7 +11,7 @@ namespace Sibyl.Perturbation.Loops;
 /// <remarks>
 /// <para>
 /// Method: product integration. At run time each spectrum is resampled on the plan's own grid of a few hundred
-/// nodes in ln q (≤ 0.08 apart in ln q, ≤ 0.005 h/Mpc apart below q = 0.7 h/Mpc to resolve baryon wiggles).
+/// nodes in ln q (≤ 0.1 apart in ln q, ≤ 0.007 h/Mpc apart below q = 0.7 h/Mpc to resolve baryon wiggles).
 /// The plan holds, for every output k, the integrals of each structure against the piecewise-cubic basis
 /// functions of that grid, computed once by nested Gauss–Legendre quadrature (graded towards the P_13 kernel
 /// kink at q = k; split at every grid node and at q = k/2 for P_22). A cosmology then costs only dot products:
