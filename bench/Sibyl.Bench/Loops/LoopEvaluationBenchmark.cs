@@ -5,6 +5,9 @@ namespace Sibyl.Bench.Loops;
 
 /// <summary>How long do all nine one-loop integrals take for a spectrum and its no-wiggle partner at 100 k?</summary>
 [MemoryDiagnoser]
+[MedianColumn]
+[MinColumn]
+[MaxColumn]
 public class LoopEvaluationBenchmark
 {
     private LoopQuadrature _plan = null!;

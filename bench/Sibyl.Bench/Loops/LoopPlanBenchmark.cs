@@ -5,6 +5,9 @@ namespace Sibyl.Bench.Loops;
 
 /// <summary>How long does building the cosmology-independent plan for 100 output k take?</summary>
 [MemoryDiagnoser]
+[MedianColumn]
+[MinColumn]
+[MaxColumn]
 public class LoopPlanBenchmark
 {
     private double[] _k = null!;

@@ -81,9 +81,9 @@ public sealed class LoopQuadrature
     public void Compute(LogSampledSpectrum spectrum, MomentumIntegrals result)
     {
         ValidateInputs(spectrum, result, nameof(spectrum), nameof(result));
-        Span<double> resampled = stackalloc double[_grid.Count];
+        Span<double> resampled = stackalloc double[_grid.Count + P22BandTable.Padding];
         Resample(spectrum, resampled);
-        _p13.Accumulate(resampled, result.AllP13);
+        _p13.Accumulate(resampled[.._grid.Count], result.AllP13);
         _p22.Accumulate(resampled, result.AllP22);
     }
 
@@ -102,21 +102,24 @@ public sealed class LoopQuadrature
             throw new ArgumentException("The two results must be distinct objects.", nameof(secondResult));
         }
 
-        Span<double> resampledFirst = stackalloc double[_grid.Count];
-        Span<double> resampledSecond = stackalloc double[_grid.Count];
+        Span<double> resampledFirst = stackalloc double[_grid.Count + P22BandTable.Padding];
+        Span<double> resampledSecond = stackalloc double[_grid.Count + P22BandTable.Padding];
         Resample(first, resampledFirst);
         Resample(second, resampledSecond);
-        _p13.Accumulate(resampledFirst, resampledSecond, firstResult.AllP13, secondResult.AllP13);
+        _p13.Accumulate(resampledFirst[.._grid.Count], resampledSecond[.._grid.Count], firstResult.AllP13, secondResult.AllP13);
         _p22.Accumulate(resampledFirst, resampledSecond, firstResult.AllP22, secondResult.AllP22);
     }
 
+    /// <summary>P at the grid's nodes, then zeros up to the destination's end (the P_22 bands' padding).</summary>
     private void Resample(LogSampledSpectrum spectrum, Span<double> destination)
     {
         ReadOnlySpan<double> lnQ = _grid.LnQ;
-        for (int i = 0; i < destination.Length; i++)
+        for (int i = 0; i < lnQ.Length; i++)
         {
             destination[i] = spectrum.EvaluateInside(lnQ[i]);
         }
+
+        destination[lnQ.Length..].Clear();
     }
 
     private void ValidateInputs(LogSampledSpectrum spectrum, MomentumIntegrals result, string spectrumName, string resultName)
