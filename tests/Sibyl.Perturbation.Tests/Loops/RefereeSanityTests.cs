@@ -58,10 +58,11 @@ public sealed class RefereeSanityTests
         {
             double r = Math.Exp(u) / k;
             double gap = Math.Abs(1.0 - r);
-            // In t = ln p² (dx = −p² dt/(2r)) the p → 0 peak at r = x = 1 becomes bounded; panels ≤ 0.5 wide in t
-            // and ≤ 0.04 h/Mpc in p, 16 Gauss–Legendre nodes each; below p² = 1e-30 the integrand is negligible.
+            // In t = ln p² (dx = −p² dt/(2r)) the p → 0 peak at r = x = 1 becomes bounded and smooth. Panels ≤ 1 wide
+            // in t and ≤ 0.04 h/Mpc in p (wiggles), 16 Gauss–Legendre nodes each; below p² = 1e-30 the integrand is
+            // negligible, and above the table's end P = 0, so the range stops there (no jump inside a panel).
             double lower = Math.Log(Math.Max(gap * gap, 1e-30));
-            double upper = 2.0 * Math.Log(1.0 + r);
+            double upper = Math.Min(2.0 * Math.Log(1.0 + r), 2.0 * Math.Log(Spectrum.QMax / k));
             double Inner(double t)
             {
                 double p2 = Math.Exp(t);
@@ -70,7 +71,12 @@ public sealed class RefereeSanityTests
                 return Spectrum.Evaluate(k * Math.Sqrt(p2)) * numerator * numerator / p2 / (2.0 * r);
             }
 
-            int panels = Math.Max((int)Math.Ceiling((upper - lower) / 0.5), (int)Math.Ceiling(2.0 * k * Math.Min(r, 1.0) / 0.04));
+            if (upper <= lower)
+            {
+                return 0.0;
+            }
+
+            int panels = Math.Max((int)Math.Ceiling(upper - lower), (int)Math.Ceiling(2.0 * k * Math.Min(r, 1.0) / 0.04));
             double width = (upper - lower) / panels;
             double inner = 0.0;
             for (int i = 0; i < panels; i++)
