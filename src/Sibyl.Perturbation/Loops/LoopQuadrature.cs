@@ -11,7 +11,7 @@ namespace Sibyl.Perturbation.Loops;
 /// <remarks>
 /// <para>
 /// Method: product integration. At run time each spectrum is resampled on the plan's own grid of a few hundred
-/// nodes in ln q (≤ 0.08 apart in ln q, ≤ 0.005 h/Mpc apart below q = 0.7 h/Mpc to resolve baryon wiggles).
+/// nodes in ln q (≤ 0.1 apart in ln q, ≤ 0.007 h/Mpc apart below q = 0.7 h/Mpc to resolve baryon wiggles).
 /// The plan holds, for every output k, the integrals of each structure against the piecewise-cubic basis
 /// functions of that grid, computed once by nested Gauss–Legendre quadrature (graded towards the P_13 kernel
 /// kink at q = k; split at every grid node and at q = k/2 for P_22). A cosmology then costs only dot products:
@@ -81,9 +81,9 @@ public sealed class LoopQuadrature
     public void Compute(LogSampledSpectrum spectrum, MomentumIntegrals result)
     {
         ValidateInputs(spectrum, result, nameof(spectrum), nameof(result));
-        Span<double> resampled = stackalloc double[_grid.Count];
+        Span<double> resampled = stackalloc double[_grid.Count + P22BandTable.Padding];
         Resample(spectrum, resampled);
-        _p13.Accumulate(resampled, result.AllP13);
+        _p13.Accumulate(resampled[.._grid.Count], result.AllP13);
         _p22.Accumulate(resampled, result.AllP22);
     }
 
@@ -102,11 +102,11 @@ public sealed class LoopQuadrature
             throw new ArgumentException("The two results must be distinct objects.", nameof(secondResult));
         }
 
-        Span<double> resampledFirst = stackalloc double[_grid.Count];
-        Span<double> resampledSecond = stackalloc double[_grid.Count];
+        Span<double> resampledFirst = stackalloc double[_grid.Count + P22BandTable.Padding];
+        Span<double> resampledSecond = stackalloc double[_grid.Count + P22BandTable.Padding];
         Resample(first, resampledFirst);
         Resample(second, resampledSecond);
-        _p13.Accumulate(resampledFirst, resampledSecond, firstResult.AllP13, secondResult.AllP13);
+        _p13.Accumulate(resampledFirst[.._grid.Count], resampledSecond[.._grid.Count], firstResult.AllP13, secondResult.AllP13);
         _p22.Accumulate(resampledFirst, resampledSecond, firstResult.AllP22, secondResult.AllP22);
     }
 

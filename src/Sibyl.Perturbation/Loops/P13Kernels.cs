@@ -79,15 +79,14 @@ internal static class P13Kernels
         {
             for (int m = 0; m <= MaxDegree; m++)
             {
+                // Horner over r^(j − MinPower), j from MaxPower down, then the shift back by r^MinPower = r⁻².
                 double sum = 0.0;
-                double power = r * r;
                 for (int j = MaxPower; j >= MinPower; j--)
                 {
-                    // Horner from r^2 down to r^-2.
                     sum = (sum * r) + Coefficients[s, m, j - MinPower];
                 }
 
-                polynomial[m] = sum / power;
+                polynomial[m] = sum / (r * r);
             }
 
             // Synthetic division by (x − x0): quotient b_i, remainder N(x0).

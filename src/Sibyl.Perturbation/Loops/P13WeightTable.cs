@@ -91,9 +91,6 @@ internal sealed class P13WeightTable
         }
     }
 
-    /// <summary>Doubles of weight storage (for memory reports).</summary>
-    public int Size => _weights.Length;
-
     /// <summary>I_s(k) for one spectrum resampled on the grid; destination is structure-major (s·kCount + k).</summary>
     public void Accumulate(ReadOnlySpan<double> spectrum, Span<double> integrals)
     {

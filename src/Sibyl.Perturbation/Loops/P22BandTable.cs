@@ -1,3 +1,7 @@
+using System.Numerics;
+using System.Runtime.CompilerServices;
+using System.Runtime.InteropServices;
+
 namespace Sibyl.Perturbation.Loops;
 
 /// <summary>
@@ -30,257 +34,327 @@ internal sealed class P22BandTable
     public P22BandTable(ProductGrid grid, ReadOnlySpan<double> k)
     {
         _kCount = k.Length;
-        int g = grid.Count;
-        var outerRule = GaussLegendreRule.Create(OuterNodes);
-        var innerRule = GaussLegendreRule.Create(InnerNodes);
-        var dense = new double[P22Weights.Count][];
-        for (int s = 0; s < P22Weights.Count; s++)
+        var builder = new Builder(grid);
+        var kRowStart = new List<int>(_kCount + 1);
+        foreach (double wavenumber in k)
         {
-            dense[s] = new double[g * g];
+            kRowStart.Add(builder.RowCount);
+            builder.AddWavenumber(wavenumber);
         }
 
-        var rowMin = new int[g];
-        var rowMax = new int[g];
-        var inner = new double[P22Weights.Count][];
+        kRowStart.Add(builder.RowCount);
+        _kRowStart = [.. kRowStart];
+        _rowOuter = [.. builder.RowOuter];
+        _rowBandStart = [.. builder.RowBandStart];
+        _rowLength = [.. builder.RowLength];
+        _rowOffset = [.. builder.RowOffset];
+        _weights = new double[P22Weights.Count][];
         for (int s = 0; s < P22Weights.Count; s++)
         {
-            inner[s] = new double[g];
+            _weights[s] = [.. builder.Weights[s]];
         }
+    }
 
-        var kRowStart = new List<int>();
-        var rowOuter = new List<int>();
-        var rowBandStart = new List<int>();
-        var rowLength = new List<int>();
-        var rowOffset = new List<int>();
-        var weights = new List<double>[P22Weights.Count];
-        for (int s = 0; s < P22Weights.Count; s++)
-        {
-            weights[s] = [];
-        }
+    /// <summary>Number of stored (i, j) weight pairs per structure, zero padding included.</summary>
+    public int PairCount => _weights[0].Length;
 
-        var outerBreaks = new List<double>();
-        Span<double> values = stackalloc double[P22Weights.Count];
-        Span<double> basis = stackalloc double[4];
-        Span<double> outerBasis = stackalloc double[4];
-        double qMax = grid.Q[^1];
-        double lnMin = grid.LnQ[0];
-        double lnMax = grid.LnQ[^1];
+    /// <summary>
+    /// How many entries past the grid's last node a resampled spectrum must provide (as zeros): bands are padded
+    /// with zero weights to whole SIMD vectors so the core needs no scalar tails.
+    /// </summary>
+    public static int Padding => Vector<double>.Count;
+
+    /// <summary>J_S(k) for one spectrum resampled on the grid plus <see cref="Padding"/> zeros; destination is structure-major (S·kCount + k).</summary>
+    public void Accumulate(ReadOnlySpan<double> spectrum, Span<double> integrals)
+    {
+        ref double p = ref MemoryMarshal.GetReference(spectrum);
+        ref double w0 = ref MemoryMarshal.GetArrayDataReference(_weights[0]);
+        ref double w1 = ref MemoryMarshal.GetArrayDataReference(_weights[1]);
+        ref double w2 = ref MemoryMarshal.GetArrayDataReference(_weights[2]);
+        int lanes = Vector<double>.Count;
         for (int kIndex = 0; kIndex < _kCount; kIndex++)
         {
-            double kk = k[kIndex];
-            double normalisation = 1.0 / (Math.PI * Math.PI * kk);
-            Array.Fill(rowMin, int.MaxValue);
-            Array.Fill(rowMax, int.MinValue);
-            outerBreaks.Clear();
-            foreach (double u in grid.LnQ)
+            Vector<double> a0 = Vector<double>.Zero, a1 = Vector<double>.Zero, a2 = Vector<double>.Zero;
+            for (int r = _kRowStart[kIndex]; r < _kRowStart[kIndex + 1]; r++)
             {
-                outerBreaks.Add(u);
-            }
-
-            outerBreaks.Add(Math.Log(0.5 * kk));
-            if (qMax - kk > grid.Q[0])
-            {
-                outerBreaks.Add(Math.Log(qMax - kk));
-            }
-
-            outerBreaks.RemoveAll(u => u < lnMin || u > lnMax);
-            outerBreaks.Sort();
-            for (int b = 0; b + 1 < outerBreaks.Count; b++)
-            {
-                double ua = outerBreaks[b];
-                double ub = outerBreaks[b + 1];
-                if (ub <= ua)
+                var outer = new Vector<double>(Unsafe.Add(ref p, _rowOuter[r]));
+                nuint offset = (nuint)_rowOffset[r];
+                nuint start = (nuint)_rowBandStart[r];
+                for (int j = 0; j < _rowLength[r]; j += lanes)
                 {
-                    continue;
+                    Vector<double> product = outer * Vector.LoadUnsafe(ref p, start + (nuint)j);
+                    nuint at = offset + (nuint)j;
+                    a0 += Vector.LoadUnsafe(ref w0, at) * product;
+                    a1 += Vector.LoadUnsafe(ref w1, at) * product;
+                    a2 += Vector.LoadUnsafe(ref w2, at) * product;
                 }
+            }
 
-                int outerCell = grid.CellOf(0.5 * (ua + ub));
-                int outerFirst = grid.StencilStart(outerCell);
-                double outerHalf = 0.5 * (ub - ua);
-                for (int n = 0; n < outerRule.Count; n++)
+            integrals[kIndex] = Vector.Sum(a0);
+            integrals[_kCount + kIndex] = Vector.Sum(a1);
+            integrals[(2 * _kCount) + kIndex] = Vector.Sum(a2);
+        }
+    }
+
+    /// <summary>J_S(k) for two spectra (each with <see cref="Padding"/> trailing zeros) sharing each pass over the weights.</summary>
+    public void Accumulate(ReadOnlySpan<double> first, ReadOnlySpan<double> second, Span<double> firstIntegrals, Span<double> secondIntegrals)
+    {
+        ref double p = ref MemoryMarshal.GetReference(first);
+        ref double q = ref MemoryMarshal.GetReference(second);
+        ref double w0 = ref MemoryMarshal.GetArrayDataReference(_weights[0]);
+        ref double w1 = ref MemoryMarshal.GetArrayDataReference(_weights[1]);
+        ref double w2 = ref MemoryMarshal.GetArrayDataReference(_weights[2]);
+        int lanes = Vector<double>.Count;
+        for (int kIndex = 0; kIndex < _kCount; kIndex++)
+        {
+            Vector<double> a0 = Vector<double>.Zero, a1 = Vector<double>.Zero, a2 = Vector<double>.Zero;
+            Vector<double> b0 = Vector<double>.Zero, b1 = Vector<double>.Zero, b2 = Vector<double>.Zero;
+            for (int r = _kRowStart[kIndex]; r < _kRowStart[kIndex + 1]; r++)
+            {
+                int i = _rowOuter[r];
+                var outerFirst = new Vector<double>(Unsafe.Add(ref p, i));
+                var outerSecond = new Vector<double>(Unsafe.Add(ref q, i));
+                nuint offset = (nuint)_rowOffset[r];
+                nuint start = (nuint)_rowBandStart[r];
+                for (int j = 0; j < _rowLength[r]; j += lanes)
                 {
-                    double u = ua + (outerHalf * (outerRule.Nodes[n] + 1.0));
-                    double q = Math.Exp(u);
-                    double pLow = q < 0.5 * kk ? kk - q : q;
-                    double pHigh = Math.Min(kk + q, qMax);
-                    if (pHigh <= pLow)
-                    {
-                        continue;
-                    }
+                    Vector<double> productFirst = outerFirst * Vector.LoadUnsafe(ref p, start + (nuint)j);
+                    Vector<double> productSecond = outerSecond * Vector.LoadUnsafe(ref q, start + (nuint)j);
+                    nuint at = offset + (nuint)j;
+                    Vector<double> v0 = Vector.LoadUnsafe(ref w0, at);
+                    Vector<double> v1 = Vector.LoadUnsafe(ref w1, at);
+                    Vector<double> v2 = Vector.LoadUnsafe(ref w2, at);
+                    a0 += v0 * productFirst;
+                    a1 += v1 * productFirst;
+                    a2 += v2 * productFirst;
+                    b0 += v0 * productSecond;
+                    b1 += v1 * productSecond;
+                    b2 += v2 * productSecond;
+                }
+            }
 
-                    double va = Math.Log(pLow);
-                    double vEnd = Math.Log(pHigh);
-                    int cell = grid.CellOf(va);
-                    int touchedMin = int.MaxValue;
-                    int touchedMax = int.MinValue;
-                    while (va < vEnd)
-                    {
-                        double vb = Math.Min(vEnd, grid.LnQ[cell + 1]);
-                        if (vb > va)
-                        {
-                            int first = grid.StencilStart(cell);
-                            touchedMin = Math.Min(touchedMin, first);
-                            touchedMax = Math.Max(touchedMax, first + 3);
-                            double innerHalf = 0.5 * (vb - va);
-                            for (int m = 0; m < innerRule.Count; m++)
-                            {
-                                double v = va + (innerHalf * (innerRule.Nodes[m] + 1.0));
-                                double p = Math.Exp(v);
-                                P22Weights.Evaluate(kk, q, p, values);
-                                grid.Basis(cell, v, basis);
-                                double w = innerHalf * innerRule.Weights[m];
-                                for (int s = 0; s < P22Weights.Count; s++)
-                                {
-                                    double value = w * values[s];
-                                    double[] target = inner[s];
-                                    for (int l = 0; l < 4; l++)
-                                    {
-                                        target[first + l] += value * basis[l];
-                                    }
-                                }
-                            }
-                        }
+            firstIntegrals[kIndex] = Vector.Sum(a0);
+            firstIntegrals[_kCount + kIndex] = Vector.Sum(a1);
+            firstIntegrals[(2 * _kCount) + kIndex] = Vector.Sum(a2);
+            secondIntegrals[kIndex] = Vector.Sum(b0);
+            secondIntegrals[_kCount + kIndex] = Vector.Sum(b1);
+            secondIntegrals[(2 * _kCount) + kIndex] = Vector.Sum(b2);
+        }
+    }
 
-                        va = vb;
-                        if (cell + 1 >= grid.CellCount)
-                        {
-                            break;
-                        }
+    /// <summary>Integrates the weights of one k at a time into a dense scratch matrix, then keeps only its bands.</summary>
+    private sealed class Builder
+    {
+        private readonly ProductGrid _grid;
+        private readonly GaussLegendreRule _outerRule = GaussLegendreRule.Create(OuterNodes);
+        private readonly GaussLegendreRule _innerRule = GaussLegendreRule.Create(InnerNodes);
+        // Dense G×G weights of the current k, per structure, and the touched j range of each row i.
+        private readonly double[][] _dense;
+        private readonly int[] _rowMin;
+        private readonly int[] _rowMax;
+        // Inner (v) integrals against each basis function j, for the current outer node.
+        private readonly double[][] _inner;
+        private readonly List<double> _outerBreaks = [];
 
-                        cell++;
-                    }
+        public Builder(ProductGrid grid)
+        {
+            _grid = grid;
+            int g = grid.Count;
+            _dense = new double[P22Weights.Count][];
+            _inner = new double[P22Weights.Count][];
+            Weights = new List<double>[P22Weights.Count];
+            for (int s = 0; s < P22Weights.Count; s++)
+            {
+                _dense[s] = new double[g * g];
+                _inner[s] = new double[g];
+                Weights[s] = [];
+            }
 
+            _rowMin = new int[g];
+            _rowMax = new int[g];
+        }
+
+        public List<int> RowOuter { get; } = [];
+
+        public List<int> RowBandStart { get; } = [];
+
+        public List<int> RowLength { get; } = [];
+
+        public List<int> RowOffset { get; } = [];
+
+        public List<double>[] Weights { get; }
+
+        public int RowCount => RowOuter.Count;
+
+        public void AddWavenumber(double k)
+        {
+            Array.Fill(_rowMin, int.MaxValue);
+            Array.Fill(_rowMax, int.MinValue);
+            double normalisation = 1.0 / (Math.PI * Math.PI * k);
+            Span<double> outerBasis = stackalloc double[4];
+            foreach ((double ua, double ub) in OuterPanels(k))
+            {
+                int outerCell = _grid.CellOf(0.5 * (ua + ub));
+                int outerFirst = _grid.StencilStart(outerCell);
+                double outerHalf = 0.5 * (ub - ua);
+                for (int n = 0; n < _outerRule.Count; n++)
+                {
+                    double u = ua + (outerHalf * (_outerRule.Nodes[n] + 1.0));
+                    (int touchedMin, int touchedMax) = IntegrateInner(k, Math.Exp(u));
                     if (touchedMin > touchedMax)
                     {
                         continue;
                     }
 
-                    grid.Basis(outerCell, u, outerBasis);
-                    double outerWeight = outerHalf * outerRule.Weights[n] * normalisation;
+                    _grid.Basis(outerCell, u, outerBasis);
+                    double outerWeight = outerHalf * _outerRule.Weights[n] * normalisation;
                     for (int l = 0; l < 4; l++)
                     {
-                        int i = outerFirst + l;
-                        double factor = outerWeight * outerBasis[l];
-                        rowMin[i] = Math.Min(rowMin[i], touchedMin);
-                        rowMax[i] = Math.Max(rowMax[i], touchedMax);
-                        for (int s = 0; s < P22Weights.Count; s++)
-                        {
-                            double[] row = dense[s];
-                            double[] source = inner[s];
-                            int offset = i * g;
-                            for (int j = touchedMin; j <= touchedMax; j++)
-                            {
-                                row[offset + j] += factor * source[j];
-                            }
-                        }
+                        AddToRow(outerFirst + l, outerWeight * outerBasis[l], touchedMin, touchedMax);
                     }
 
                     for (int s = 0; s < P22Weights.Count; s++)
                     {
-                        Array.Clear(inner[s], touchedMin, touchedMax - touchedMin + 1);
+                        Array.Clear(_inner[s], touchedMin, touchedMax - touchedMin + 1);
                     }
                 }
             }
 
-            kRowStart.Add(rowOuter.Count);
+            KeepBands();
+        }
+
+        /// <summary>Outer panels in u: the grid cells, split at q = k/2 and q = qMax − k.</summary>
+        private List<(double Start, double End)> OuterPanels(double k)
+        {
+            double lnMin = _grid.LnQ[0];
+            double lnMax = _grid.LnQ[^1];
+            _outerBreaks.Clear();
+            foreach (double u in _grid.LnQ)
+            {
+                _outerBreaks.Add(u);
+            }
+
+            _outerBreaks.Add(Math.Log(0.5 * k));
+            if (_grid.Q[^1] - k > _grid.Q[0])
+            {
+                _outerBreaks.Add(Math.Log(_grid.Q[^1] - k));
+            }
+
+            _outerBreaks.RemoveAll(u => u < lnMin || u > lnMax);
+            _outerBreaks.Sort();
+            var panels = new List<(double, double)>(_outerBreaks.Count);
+            for (int b = 0; b + 1 < _outerBreaks.Count; b++)
+            {
+                if (_outerBreaks[b + 1] > _outerBreaks[b])
+                {
+                    panels.Add((_outerBreaks[b], _outerBreaks[b + 1]));
+                }
+            }
+
+            return panels;
+        }
+
+        /// <summary>
+        /// Fills the inner integrals ∫dv q²p²S φ_j(v) over max(q, |k − q|) ≤ p ≤ min(k + q, qMax), one panel per
+        /// grid cell met; returns the range of j touched (empty when the p interval is).
+        /// </summary>
+        private (int Min, int Max) IntegrateInner(double k, double q)
+        {
+            double pLow = q < 0.5 * k ? k - q : q;
+            double pHigh = Math.Min(k + q, _grid.Q[^1]);
+            int touchedMin = int.MaxValue;
+            int touchedMax = int.MinValue;
+            if (pHigh <= pLow)
+            {
+                return (touchedMin, touchedMax);
+            }
+
+            Span<double> values = stackalloc double[P22Weights.Count];
+            Span<double> basis = stackalloc double[4];
+            double va = Math.Log(pLow);
+            double vEnd = Math.Log(pHigh);
+            for (int cell = _grid.CellOf(va); va < vEnd && cell < _grid.CellCount; cell++)
+            {
+                double vb = Math.Min(vEnd, _grid.LnQ[cell + 1]);
+                if (vb > va)
+                {
+                    int first = _grid.StencilStart(cell);
+                    touchedMin = Math.Min(touchedMin, first);
+                    touchedMax = Math.Max(touchedMax, first + 3);
+                    double half = 0.5 * (vb - va);
+                    for (int m = 0; m < _innerRule.Count; m++)
+                    {
+                        double v = va + (half * (_innerRule.Nodes[m] + 1.0));
+                        P22Weights.Evaluate(k, q, Math.Exp(v), values);
+                        _grid.Basis(cell, v, basis);
+                        double weight = half * _innerRule.Weights[m];
+                        for (int s = 0; s < P22Weights.Count; s++)
+                        {
+                            double value = weight * values[s];
+                            double[] target = _inner[s];
+                            for (int l = 0; l < 4; l++)
+                            {
+                                target[first + l] += value * basis[l];
+                            }
+                        }
+                    }
+                }
+
+                va = vb;
+            }
+
+            return (touchedMin, touchedMax);
+        }
+
+        private void AddToRow(int i, double factor, int touchedMin, int touchedMax)
+        {
+            int offset = i * _grid.Count;
+            _rowMin[i] = Math.Min(_rowMin[i], touchedMin);
+            _rowMax[i] = Math.Max(_rowMax[i], touchedMax);
+            for (int s = 0; s < P22Weights.Count; s++)
+            {
+                double[] row = _dense[s];
+                double[] source = _inner[s];
+                for (int j = touchedMin; j <= touchedMax; j++)
+                {
+                    row[offset + j] += factor * source[j];
+                }
+            }
+        }
+
+        /// <summary>Moves every touched row's band to the packed lists and clears the dense scratch.</summary>
+        private void KeepBands()
+        {
+            int g = _grid.Count;
             for (int i = 0; i < g; i++)
             {
-                if (rowMin[i] > rowMax[i])
+                if (_rowMin[i] > _rowMax[i])
                 {
                     continue;
                 }
 
-                int length = rowMax[i] - rowMin[i] + 1;
-                rowOuter.Add(i);
-                rowBandStart.Add(rowMin[i]);
-                rowLength.Add(length);
-                rowOffset.Add(weights[0].Count);
+                int length = _rowMax[i] - _rowMin[i] + 1;
+                int padded = (length + Padding - 1) / Padding * Padding;
+                RowOuter.Add(i);
+                RowBandStart.Add(_rowMin[i]);
+                RowLength.Add(padded);
+                RowOffset.Add(Weights[0].Count);
                 for (int s = 0; s < P22Weights.Count; s++)
                 {
-                    Span<double> band = dense[s].AsSpan((i * g) + rowMin[i], length);
+                    Span<double> band = _dense[s].AsSpan((i * g) + _rowMin[i], length);
                     foreach (double w in band)
                     {
-                        weights[s].Add(w);
+                        Weights[s].Add(w);
+                    }
+
+                    for (int pad = length; pad < padded; pad++)
+                    {
+                        Weights[s].Add(0.0);
                     }
 
                     band.Clear();
                 }
             }
-        }
-
-        kRowStart.Add(rowOuter.Count);
-        _kRowStart = [.. kRowStart];
-        _rowOuter = [.. rowOuter];
-        _rowBandStart = [.. rowBandStart];
-        _rowLength = [.. rowLength];
-        _rowOffset = [.. rowOffset];
-        _weights = new double[P22Weights.Count][];
-        for (int s = 0; s < P22Weights.Count; s++)
-        {
-            _weights[s] = [.. weights[s]];
-        }
-    }
-
-    /// <summary>Number of stored (i, j) weight pairs per structure.</summary>
-    public int PairCount => _weights[0].Length;
-
-    /// <summary>J_S(k) for one spectrum on the grid; destination is structure-major (S·kCount + k).</summary>
-    public void Accumulate(ReadOnlySpan<double> spectrum, Span<double> integrals)
-    {
-        ReadOnlySpan<double> w0 = _weights[0], w1 = _weights[1], w2 = _weights[2];
-        for (int kIndex = 0; kIndex < _kCount; kIndex++)
-        {
-            double j0 = 0.0, j1 = 0.0, j2 = 0.0;
-            for (int r = _kRowStart[kIndex]; r < _kRowStart[kIndex + 1]; r++)
-            {
-                int offset = _rowOffset[r];
-                int length = _rowLength[r];
-                ReadOnlySpan<double> band = spectrum.Slice(_rowBandStart[r], length);
-                double outer = spectrum[_rowOuter[r]];
-                j0 += outer * VectorDot.Dot(w0.Slice(offset, length), band);
-                j1 += outer * VectorDot.Dot(w1.Slice(offset, length), band);
-                j2 += outer * VectorDot.Dot(w2.Slice(offset, length), band);
-            }
-
-            integrals[kIndex] = j0;
-            integrals[_kCount + kIndex] = j1;
-            integrals[(2 * _kCount) + kIndex] = j2;
-        }
-    }
-
-    /// <summary>J_S(k) for two spectra sharing each pass over the weights.</summary>
-    public void Accumulate(ReadOnlySpan<double> first, ReadOnlySpan<double> second, Span<double> firstIntegrals, Span<double> secondIntegrals)
-    {
-        ReadOnlySpan<double> w0 = _weights[0], w1 = _weights[1], w2 = _weights[2];
-        for (int kIndex = 0; kIndex < _kCount; kIndex++)
-        {
-            double a0 = 0.0, a1 = 0.0, a2 = 0.0, b0 = 0.0, b1 = 0.0, b2 = 0.0;
-            for (int r = _kRowStart[kIndex]; r < _kRowStart[kIndex + 1]; r++)
-            {
-                int offset = _rowOffset[r];
-                int length = _rowLength[r];
-                int start = _rowBandStart[r];
-                ReadOnlySpan<double> bandA = first.Slice(start, length);
-                ReadOnlySpan<double> bandB = second.Slice(start, length);
-                double outerA = first[_rowOuter[r]];
-                double outerB = second[_rowOuter[r]];
-                (double x0, double y0) = VectorDot.Dot2(w0.Slice(offset, length), bandA, bandB);
-                (double x1, double y1) = VectorDot.Dot2(w1.Slice(offset, length), bandA, bandB);
-                (double x2, double y2) = VectorDot.Dot2(w2.Slice(offset, length), bandA, bandB);
-                a0 += outerA * x0;
-                a1 += outerA * x1;
-                a2 += outerA * x2;
-                b0 += outerB * y0;
-                b1 += outerB * y1;
-                b2 += outerB * y2;
-            }
-
-            firstIntegrals[kIndex] = a0;
-            firstIntegrals[_kCount + kIndex] = a1;
-            firstIntegrals[(2 * _kCount) + kIndex] = a2;
-            secondIntegrals[kIndex] = b0;
-            secondIntegrals[_kCount + kIndex] = b1;
-            secondIntegrals[(2 * _kCount) + kIndex] = b2;
         }
     }
 }

@@ -30,33 +30,55 @@ internal sealed class BruteForceReferee(LogSampledSpectrum spectrum)
     }
 
     /// <summary>
-    /// J_S(k) = 2∫d³q/(2π)³ S P(q)P(p): by the q ↔ k − q symmetry, twice the part with p ≥ q, i.e. x ≤ k/(2q):
-    /// J = (1/π²)∫du q³ P(q) ∫_{−1}^{min(1, k/2q)} dx S P(p).
+    /// J_S(k) = 2∫d³q/(2π)³ S P(q)P(p) for the three structures: by the q ↔ k − q symmetry, twice the part with
+    /// p ≥ q, i.e. x ≤ k/(2q): J = (1/π²)∫du q³ P(q) ∫_{−1}^{min(1, k/2q)} dx S P(p). One adaptive outer integral
+    /// per structure; the inner integrals of all three are computed together and remembered per outer node.
     /// </summary>
-    public double P22(P22Structure structure, double k)
+    public double[] P22(double k)
     {
-        int s = (int)structure;
-        double Outer(double u)
+        var inner = new Dictionary<double, double[]>();
+        double[] InnerAll(double u)
         {
-            double q = Math.Exp(u);
-            double top = Math.Min(1.0, k / (2.0 * q));
-            double Inner(double x)
+            if (!inner.TryGetValue(u, out double[]? values))
             {
-                double p = Math.Sqrt((k * k) + (q * q) - (2.0 * k * q * x));
-                double mu = ((k * q * x) - (q * q)) / (q * p);
-                return DefinitionStructures.P22(s, q, p, mu) * _spectrum.Evaluate(p);
+                values = new double[3];
+                double q = Math.Exp(u);
+                double top = Math.Min(1.0, k / (2.0 * q));
+                // Split where p crosses the table's end, where P jumps to zero.
+                double cut = ((k * k) + (q * q) - (_spectrum.QMax * _spectrum.QMax)) / (2.0 * k * q);
+                double span = 2.0 * Math.Min(k, q);
+                double weight = q * q * q * _spectrum.Evaluate(q);
+                for (int s = 0; s < 3; s++)
+                {
+                    int structure = s;
+                    double Inner(double x)
+                    {
+                        double p = Math.Sqrt((k * k) + (q * q) - (2.0 * k * q * x));
+                        double mu = ((k * q * x) - (q * q)) / (q * p);
+                        return DefinitionStructures.P22(structure, q, p, mu) * _spectrum.Evaluate(p);
+                    }
+
+                    double integral = cut > -1.0 && cut < top
+                        ? Panels(Inner, -1.0, cut, span) + Panels(Inner, cut, top, span)
+                        : Panels(Inner, -1.0, top, span);
+                    values[s] = weight * integral;
+                }
+
+                inner[u] = values;
             }
 
-            // Split where p crosses the table's end, where P jumps to zero.
-            double cut = ((k * k) + (q * q) - (_spectrum.QMax * _spectrum.QMax)) / (2.0 * k * q);
-            double span = 2.0 * Math.Min(k, q);
-            double inner = cut > -1.0 && cut < top
-                ? Panels(Inner, -1.0, cut, span) + Panels(Inner, cut, top, span)
-                : Panels(Inner, -1.0, top, span);
-            return q * q * q * _spectrum.Evaluate(q) * inner;
+            return values;
         }
 
-        return OuterIntegral(Outer, [Math.Log(_spectrum.QMin), Math.Log(0.5 * k), Math.Log(_spectrum.QMax)]) / (Math.PI * Math.PI);
+        var result = new double[3];
+        double[] breakpoints = [Math.Log(_spectrum.QMin), Math.Log(0.5 * k), Math.Log(_spectrum.QMax)];
+        for (int s = 0; s < 3; s++)
+        {
+            int structure = s;
+            result[s] = OuterIntegral(u => InnerAll(u)[structure], breakpoints) / (Math.PI * Math.PI);
+        }
+
+        return result;
     }
 
     /// <summary>K_s(r) = ∫dx M_s(x, r) from the literal definition.</summary>
@@ -91,25 +113,6 @@ internal sealed class BruteForceReferee(LogSampledSpectrum spectrum)
         return sum;
     }
 
-    /// <summary>
-    /// ∫_{−1}^{1} f dx for integrands peaked at x = 1 with width ~ gap² (gap = |1 − r|): adaptive Gauss–Kronrod on
-    /// pieces ending at 1 − gap and 1 − gap²; pieces that rounding makes empty are skipped.
-    /// </summary>
-    public static double NearPole(Func<double, double> f, double gap, double tolerance)
-    {
-        double[] edges = [-1.0, 1.0 - Math.Min(0.5, gap), 1.0 - Math.Min(0.25, gap * gap), 1.0];
-        double sum = 0.0;
-        for (int e = 0; e + 1 < edges.Length; e++)
-        {
-            if (edges[e + 1] > edges[e])
-            {
-                sum += GaussKronrodRule.Integrate(f, edges[e], edges[e + 1], out _, out _, tolerance, 15, 31);
-            }
-        }
-
-        return sum;
-    }
-
     /// <summary>Adaptive Gauss–Kronrod over consecutive pieces (breakpoints at kinks of the integrand).</summary>
     public static double OuterIntegral(Func<double, double> f, double[] breakpoints)
     {
@@ -126,12 +129,12 @@ internal sealed class BruteForceReferee(LogSampledSpectrum spectrum)
     }
 
     /// <summary>
-    /// Gauss–Legendre panels, 16 nodes each, one panel per 0.03 h/Mpc of the span of p = |k − q| (at least two):
-    /// ≥ 30 nodes per wiggle period of 0.06 h/Mpc.
+    /// Gauss–Legendre panels, 16 nodes each, one panel per 0.04 h/Mpc of the span of p = |k − q| (at least two):
+    /// ≥ 24 nodes per wiggle period of 0.06 h/Mpc.
     /// </summary>
     private static double Panels(Func<double, double> f, double a, double b, double pSpan)
     {
-        int panelCount = Math.Max(2, (int)Math.Ceiling(pSpan / 0.03));
+        int panelCount = Math.Max(2, (int)Math.Ceiling(pSpan / 0.04));
         double width = (b - a) / panelCount;
         double sum = 0.0;
         for (int i = 0; i < panelCount; i++)
