@@ -1,0 +1,91 @@
+using System.Globalization;
+using Sibyl.Perturbation.Loops;
+
+namespace Sibyl.Perturbation.RedshiftSpace;
+
+/// <summary>
+/// The argument rules of a product-integration plan, identical to <see cref="LoopQuadrature"/>'s so that both
+/// plans accept the same k grids and table ranges (and could share this class).
+/// </summary>
+internal static class PlanArguments
+{
+    // As in LoopQuadrature: caps the resampling grid so that its scratch buffers fit comfortably on the stack.
+    private const double LargestTableRatio = 1e30;
+
+    /// <summary>Throws unless 0 &lt; qMin &lt; qMax ≤ 1e30·qMin, all finite (h/Mpc).</summary>
+    public static void ValidateRange(double qMin, double qMax)
+    {
+        if (!double.IsFinite(qMin) || qMin <= 0.0)
+        {
+            throw new ArgumentException(string.Create(CultureInfo.InvariantCulture, $"qMin = {qMin:R} h/Mpc must be finite and positive."), nameof(qMin));
+        }
+
+        if (!double.IsFinite(qMax) || qMax <= qMin || qMax / qMin > LargestTableRatio)
+        {
+            throw new ArgumentException(
+                string.Create(CultureInfo.InvariantCulture, $"qMax = {qMax:R} h/Mpc must be finite, above qMin = {qMin:R} and at most {LargestTableRatio:R} times it."),
+                nameof(qMax));
+        }
+    }
+
+    /// <summary>Throws unless k is non-empty, finite, positive, strictly increasing and within the range less the margin.</summary>
+    public static void ValidateWavenumbers(ReadOnlySpan<double> k, double qMin, double qMax)
+    {
+        if (k.IsEmpty)
+        {
+            throw new ArgumentException("At least one output wavenumber is needed.", nameof(k));
+        }
+
+        double lowest = qMin * LoopQuadrature.RangeMargin;
+        double highest = qMax / LoopQuadrature.RangeMargin;
+        for (int i = 0; i < k.Length; i++)
+        {
+            double value = k[i];
+            if (!double.IsFinite(value) || value <= 0.0)
+            {
+                throw new ArgumentException(string.Create(CultureInfo.InvariantCulture, $"k[{i}] = {value:R} h/Mpc must be finite and positive."), nameof(k));
+            }
+
+            if (value < lowest || value > highest)
+            {
+                throw new ArgumentException(
+                    string.Create(CultureInfo.InvariantCulture, $"k[{i}] = {value:R} h/Mpc lies outside [{lowest:R}, {highest:R}], the table range [{qMin:R}, {qMax:R}] less a factor {LoopQuadrature.RangeMargin:R} margin."),
+                    nameof(k));
+            }
+
+            if (i > 0 && value <= k[i - 1])
+            {
+                throw new ArgumentException(
+                    string.Create(CultureInfo.InvariantCulture, $"k[{i}] = {value:R} h/Mpc does not exceed k[{i - 1}] = {k[i - 1]:R}: the grid must be strictly increasing."),
+                    nameof(k));
+            }
+        }
+    }
+
+    /// <summary>Throws unless the spectrum spans [qMin, qMax] and the result holds kCount wavenumbers.</summary>
+    public static void ValidateInputs(
+        LogSampledSpectrum spectrum,
+        int resultKCount,
+        double qMin,
+        double qMax,
+        int kCount,
+        string spectrumName,
+        string resultName)
+    {
+        if (!spectrum.HasSameRangeAs(qMin, qMax))
+        {
+            throw new ArgumentException(
+                string.Create(
+                    CultureInfo.InvariantCulture,
+                    $"The spectrum spans [{spectrum.QMin:R}, {spectrum.QMax:R}] h/Mpc but the plan was built for [{qMin:R}, {qMax:R}]."),
+                spectrumName);
+        }
+
+        if (resultKCount != kCount)
+        {
+            throw new ArgumentException(
+                string.Create(CultureInfo.InvariantCulture, $"The result holds {resultKCount} wavenumbers but the plan has {kCount}."),
+                resultName);
+        }
+    }
+}
