@@ -1,13 +1,14 @@
 using Sibyl.Cli.Arguments;
 using Sibyl.Cosmology.Parameters;
 using Sibyl.Perturbation.Matter;
+using Sibyl.Perturbation.RedshiftSpace;
 
 namespace Sibyl.Cli.Commands;
 
 /// <summary><c>sibyl compute linear|matter</c>.</summary>
 internal static class ComputeCommand
 {
-    private static readonly IReadOnlySet<string> Flags = new HashSet<string>(StringComparer.Ordinal) { "help" };
+    private static readonly IReadOnlySet<string> Flags = new HashSet<string>(StringComparer.Ordinal) { "help", "basis" };
 
     public static int Run(string[] args, TextWriter stdout, TextWriter stderr)
     {
@@ -29,7 +30,8 @@ internal static class ComputeCommand
         {
             "linear" => ComputeLinear.Run(Parse(arguments)),
             "matter" => ComputeMatter.Run(Parse(arguments, MatterLayout.SoundSpeedDefinition, out double cs2), cs2),
-            _ => throw new UsageException($"compute: unknown output '{args[0]}'; expected linear or matter"),
+            "galaxy" => Galaxy(arguments),
+            _ => throw new UsageException($"compute: unknown output '{args[0]}'; expected linear, matter or galaxy"),
         };
 
         stderr.WriteLine(result.Summary);
@@ -60,10 +62,22 @@ internal static class ComputeCommand
 
     private static PointArguments Parse(CommandArguments arguments, ParameterDefinition extra, out double value)
     {
-        arguments.MarkUsed([extra.Name]);
-        value = arguments.Parameters.TryGetValue(extra.Name, out var text)
-            ? extra.Check(ParameterCatalog.ParseNumber(extra.Name, text))
-            : extra.Default;
+        value = Value(arguments, extra);
         return Parse(arguments);
+    }
+
+    private static ComputeResult Galaxy(CommandArguments arguments)
+    {
+        var nuisance = GalaxyLayout.Nuisance.Select(d => Value(arguments, d)).ToArray();
+        bool basis = arguments.HasFlag("basis");
+        return ComputeGalaxy.Run(Parse(arguments), nuisance, basis);
+    }
+
+    private static double Value(CommandArguments arguments, ParameterDefinition definition)
+    {
+        arguments.MarkUsed([definition.Name]);
+        return arguments.Parameters.TryGetValue(definition.Name, out var text)
+            ? definition.Check(ParameterCatalog.ParseNumber(definition.Name, text))
+            : definition.Default;
     }
 }

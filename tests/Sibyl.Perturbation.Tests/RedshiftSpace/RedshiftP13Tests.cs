@@ -66,7 +66,7 @@ public class RedshiftP13Tests
         double mu2 = mu * mu, sum = 0.0;
         foreach (var m in Enum.GetValues<GalaxyMonomial>())
         {
-            sum += BiasProduct(m, bias) * MuPolynomials.Evaluate(block, m, mu2);
+            sum += Monomials.Product(m, bias) * MuPolynomials.Evaluate(block, m, mu2);
         }
 
         return sum;
@@ -107,23 +107,6 @@ public class RedshiftP13Tests
                           + GaussKronrodRule.Integrate(Radial, lnK, Math.Log(Spectrum.QMax), out _, out _, 1e-5, 10, 15);
         return 6.0 * z.Z1(kv) * Spectrum.Evaluate(k) * integral / Math.Pow(2.0 * Math.PI, 3);
     }
-
-    private static double BiasProduct(GalaxyMonomial m, GalaxyBias b) => m switch
-    {
-        GalaxyMonomial.One => 1.0,
-        GalaxyMonomial.B1 => b.B1,
-        GalaxyMonomial.B1B1 => b.B1 * b.B1,
-        GalaxyMonomial.B2 => b.B2,
-        GalaxyMonomial.B1B2 => b.B1 * b.B2,
-        GalaxyMonomial.B2B2 => b.B2 * b.B2,
-        GalaxyMonomial.BG2 => b.BG2,
-        GalaxyMonomial.B1BG2 => b.B1 * b.BG2,
-        GalaxyMonomial.B2BG2 => b.B2 * b.BG2,
-        GalaxyMonomial.BG2BG2 => b.BG2 * b.BG2,
-        GalaxyMonomial.BGamma3 => b.BGamma3,
-        GalaxyMonomial.B1BGamma3 => b.B1 * b.BGamma3,
-        _ => throw new ArgumentOutOfRangeException(nameof(m)),
-    };
 
     private static LogSampledSpectrum LinearAtZ()
     {
