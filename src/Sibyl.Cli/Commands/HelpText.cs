@@ -1,6 +1,8 @@
 using System.Globalization;
 using System.Text;
 using Sibyl.Cosmology.Parameters;
+using Sibyl.Perturbation.Matter;
+using Sibyl.Perturbation.RedshiftSpace;
 
 namespace Sibyl.Cli.Commands;
 
@@ -13,6 +15,7 @@ internal static class HelpText
         commands:
           compute linear [name=value ...] [options]   linear spectrum P_lin and its no-wiggle partner P_nw
           compute matter [name=value ...] [options]   one-loop real-space matter spectrum, IR-resummed
+          compute galaxy [name=value ...] [options]   one-loop redshift-space galaxy multipoles P0, P2, P4
 
         sibyl compute --help lists every parameter with its default, range and unit.
         """;
@@ -21,7 +24,7 @@ internal static class HelpText
     {
         var text = new StringBuilder();
         text.Append("""
-            usage: sibyl compute linear|matter [name=value ...] [options]
+            usage: sibyl compute linear|matter|galaxy [name=value ...] [options]
 
             Writes a CSV (header row, invariant culture, round-trip precision) to stdout or --out;
             growth D, f and sigma8 at z go to stderr. Units: k in h/Mpc, P in (Mpc/h)^3.
@@ -31,16 +34,19 @@ internal static class HelpText
         text.Append('\n');
         foreach (var d in ParameterCatalog.All.Append(ParameterCatalog.Redshift))
         {
-            string value = double.IsNaN(d.Default) ? "unset" : d.Default.ToString("G", CultureInfo.InvariantCulture);
-            string unit = d.Unit.Length > 0 ? " " + d.Unit : "";
-            text.Append(CultureInfo.InvariantCulture, $"  {d.Name,-10} [{value}{unit}] in {d.Range}: {d.Meaning}\n");
+            Describe(text, d);
         }
 
-        text.Append(CultureInfo.InvariantCulture, $"  {ParameterCatalog.ModelName,-10} [lcdm] one of {string.Join(", ", ParameterCatalog.Models.Keys)}\n");
-        text.Append(CultureInfo.InvariantCulture, $$"""
+        text.Append(CultureInfo.InvariantCulture, $"  {ParameterCatalog.ModelName,-11} [lcdm] one of {string.Join(", ", ParameterCatalog.Models.Keys)}\n");
+        text.Append("\ncompute matter also takes:\n");
+        Describe(text, MatterLayout.SoundSpeedDefinition);
+        text.Append("\ncompute galaxy also takes (nuisance parameters):\n");
+        foreach (var d in GalaxyLayout.Nuisance)
+        {
+            Describe(text, d);
+        }
 
-            compute matter also takes:
-              cs2        [0 (Mpc/h)^2] in [-1000, 1000]: EFT counterterm, adds -2 cs2 k^2 P_IR
+        text.Append(CultureInfo.InvariantCulture, $$"""
 
             options:
               --kmin K   [{{PointArguments.DefaultKMin:G}}] smallest output k, h/Mpc
@@ -50,9 +56,17 @@ internal static class HelpText
                          its amplitude replaces ln10As/sigma8; never extrapolated)
               --out F    write the CSV to F (atomically) instead of stdout
               --plot F   also write a PNG figure to F
+              --basis    compute galaxy: also write every basis term (one column each)
               --help     this text
 
             """);
         return text.ToString();
+    }
+
+    private static void Describe(StringBuilder text, ParameterDefinition d)
+    {
+        string value = double.IsNaN(d.Default) ? "unset" : d.Default.ToString("G", CultureInfo.InvariantCulture);
+        string unit = d.Unit.Length > 0 ? " " + d.Unit : "";
+        text.Append(CultureInfo.InvariantCulture, $"  {d.Name,-11} [{value}{unit}] in {d.Range}: {d.Meaning}\n");
     }
 }
