@@ -38,6 +38,13 @@ internal static class Entry
             stderr.WriteLine($"sibyl: {e.Message.Split(" (Parameter '")[0]}");
             return UsageError;
         }
+        catch (ArgumentException e)
+        {
+            // Physics code validates its inputs with ArgumentException; anything reaching here came from
+            // the user's values, so it is reported like any other bad input.
+            stderr.WriteLine($"sibyl: {e.Message}");
+            return UsageError;
+        }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {
             stderr.WriteLine($"sibyl: {e.Message}");

@@ -25,6 +25,11 @@ internal sealed class CommandArguments
                 int eq = name.IndexOf('=', StringComparison.Ordinal);
                 if (eq >= 0)
                 {
+                    if (flagOptions.Contains(name[..eq]))
+                    {
+                        throw new UsageException($"--{name[..eq]}: takes no value");
+                    }
+
                     _options[name[..eq]] = name[(eq + 1)..];
                 }
                 else if (flagOptions.Contains(name))

@@ -4,7 +4,7 @@ namespace Sibyl.Cli.Arguments;
 
 /// <summary>
 /// Reads a user's linear spectrum: two columns k [h/Mpc] and P [(Mpc/h)³] separated by commas or
-/// whitespace; lines starting with '#' and a first line that is not numeric (a header) are skipped.
+/// whitespace; lines starting with '#' and one non-numeric line before the data (a header) are skipped.
 /// </summary>
 internal static class LinearTableReader
 {
@@ -18,6 +18,7 @@ internal static class LinearTableReader
         var k = new List<double>();
         var p = new List<double>();
         int lineNumber = 0;
+        bool headerSkipped = false;
         foreach (string raw in File.ReadLines(path))
         {
             lineNumber++;
@@ -30,8 +31,9 @@ internal static class LinearTableReader
             string[] fields = line.Split([',', ' ', '\t', ';'], StringSplitOptions.RemoveEmptyEntries);
             if (fields.Length < 2 || !TryNumber(fields[0], out double kValue) || !TryNumber(fields[1], out double pValue))
             {
-                if (k.Count == 0 && lineNumber == 1)
+                if (k.Count == 0 && !headerSkipped)
                 {
+                    headerSkipped = true;
                     continue;
                 }
 

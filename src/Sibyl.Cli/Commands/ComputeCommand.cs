@@ -1,11 +1,12 @@
 using Sibyl.Cli.Arguments;
+using Sibyl.Cli.Output;
 using Sibyl.Cosmology.Parameters;
 using Sibyl.Perturbation.Matter;
 using Sibyl.Perturbation.RedshiftSpace;
 
 namespace Sibyl.Cli.Commands;
 
-/// <summary><c>sibyl compute linear|matter</c>.</summary>
+/// <summary><c>sibyl compute linear|matter|galaxy</c>.</summary>
 internal static class ComputeCommand
 {
     private static readonly IReadOnlySet<string> Flags = new HashSet<string>(StringComparer.Ordinal) { "help", "basis" };
@@ -24,6 +25,16 @@ internal static class ComputeCommand
         if (plotPath is not null && !plotPath.EndsWith(".png", StringComparison.OrdinalIgnoreCase))
         {
             throw new UsageException($"--plot: '{plotPath}' must end in .png");
+        }
+
+        if (outPath is not null)
+        {
+            AtomicFile.RequireFolder(outPath, "--out");
+        }
+
+        if (plotPath is not null)
+        {
+            AtomicFile.RequireFolder(plotPath, "--plot");
         }
 
         ComputeResult result = args[0] switch

@@ -10,7 +10,9 @@ internal static class ComputeGalaxy
 {
     public static ComputeResult Run(PointArguments point, double[] nuisance, bool basis)
     {
-        var spectrum = new OneLoopGalaxy(point.K).Compute(point.Model, point.Redshift);
+        point.RequireLoopRange();
+        var linear = point.Model.Linear;
+        var spectrum = new OneLoopGalaxy(point.K, qMin: linear.KMin, qMax: linear.KMax).Compute(point.Model, point.Redshift);
         var p0 = spectrum.Multipole(0, nuisance);
         var p2 = spectrum.Multipole(2, nuisance);
         var p4 = spectrum.Multipole(4, nuisance);

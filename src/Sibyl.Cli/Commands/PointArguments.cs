@@ -1,6 +1,8 @@
+using System.Globalization;
 using Sibyl.Cli.Arguments;
 using Sibyl.Cosmology;
 using Sibyl.Cosmology.Parameters;
+using Sibyl.Perturbation.Loops;
 
 namespace Sibyl.Cli.Commands;
 
@@ -51,5 +53,17 @@ internal sealed record PointArguments(CosmologyModel Model, double Redshift, dou
         }
 
         return new PointArguments(model, z, Cosmology.Linear.LogGridFunction.LogGrid(kMin, kMax, count));
+    }
+
+    /// <summary>One-loop outputs integrate over the linear table, so their k must sit a factor 10 inside it.</summary>
+    public void RequireLoopRange()
+    {
+        double low = Model.Linear.KMin * LoopQuadrature.RangeMargin, high = Model.Linear.KMax / LoopQuadrature.RangeMargin;
+        if (K[0] < low * (1 - 1e-12) || K[^1] > high * (1 + 1e-12))
+        {
+            throw new UsageException(string.Create(
+                CultureInfo.InvariantCulture,
+                $"--kmin/--kmax: one-loop outputs need k in [{low:G6}, {high:G6}] h/Mpc, a factor {LoopQuadrature.RangeMargin:G} inside the linear table's range"));
+        }
     }
 }

@@ -20,12 +20,15 @@ public sealed class OneLoopMatter
     private readonly LoopQuadrature _quadrature;
 
     /// <summary>Builds the cosmology-independent quadrature plan for output wavenumbers <paramref name="k"/> (h/Mpc).</summary>
-    /// <exception cref="ArgumentException">k is not finite, positive and increasing inside [1e-4, 10] h/Mpc.</exception>
-    public OneLoopMatter(double[] k)
+    /// <param name="k">Output wavenumbers, finite, positive, increasing, a factor 10 inside [qMin, qMax].</param>
+    /// <param name="qMin">Lower end of the linear tables the loops integrate over, h/Mpc.</param>
+    /// <param name="qMax">Upper end, h/Mpc.</param>
+    /// <exception cref="ArgumentException">k or the range is invalid; the message names the value.</exception>
+    public OneLoopMatter(double[] k, double qMin = LinearSpectrumFactory.DefaultKMin, double qMax = LinearSpectrumFactory.DefaultKMax)
     {
         ArgumentNullException.ThrowIfNull(k);
         K = (double[])k.Clone();
-        _quadrature = new LoopQuadrature(K, LinearSpectrumFactory.DefaultKMin, LinearSpectrumFactory.DefaultKMax);
+        _quadrature = new LoopQuadrature(K, qMin, qMax);
     }
 
     /// <summary>Output wavenumbers, h/Mpc.</summary>
@@ -90,7 +93,7 @@ public sealed class OneLoopMatter
         return Compute(Prepare(model.Linear), model, z);
     }
 
-    /// <summary>Evaluates already prepared integrals for <paramref name="model"/> at redshift <paramref name="z"/> (in [0, 99]).</summary>
+    /// <summary>Evaluates already prepared integrals for <paramref name="model"/> at redshift <paramref name="z"/> (in [0, 20]).</summary>
     public MatterSpectrum Compute(PreparedShape shape, CosmologyModel model, double z)
     {
         ArgumentNullException.ThrowIfNull(model);

@@ -23,6 +23,8 @@ public sealed class OneLoopGalaxy
     /// </summary>
     public const int DefaultMuNodes = 16;
 
+    private static readonly GalaxyMonomial[] Monomials = Enum.GetValues<GalaxyMonomial>();
+
     private readonly LoopQuadrature _matter;
     private readonly RedshiftP22Quadrature _p22;
     private readonly RedshiftP13Quadrature _p13;
@@ -32,14 +34,17 @@ public sealed class OneLoopGalaxy
     /// <summary>Builds the cosmology-independent plans for output wavenumbers <paramref name="k"/> (h/Mpc).</summary>
     /// <param name="k">Output wavenumbers, increasing, inside [1e-4, 10] h/Mpc.</param>
     /// <param name="muNodes">Gauss–Legendre nodes in μ ∈ [0, 1], at least 7.</param>
-    public OneLoopGalaxy(double[] k, int muNodes = DefaultMuNodes)
+    /// <param name="qMin">Lower end of the linear tables the plans integrate over, h/Mpc.</param>
+    /// <param name="qMax">Upper end, h/Mpc; every k must lie a factor 10 inside [qMin, qMax].</param>
+    /// <exception cref="ArgumentException">k or the range is invalid; the message names the value.</exception>
+    public OneLoopGalaxy(double[] k, int muNodes = DefaultMuNodes, double qMin = LinearSpectrumFactory.DefaultKMin, double qMax = LinearSpectrumFactory.DefaultKMax)
     {
         ArgumentOutOfRangeException.ThrowIfLessThan(muNodes, 7);
         ArgumentNullException.ThrowIfNull(k);
         K = (double[])k.Clone();
-        _matter = new LoopQuadrature(K, LinearSpectrumFactory.DefaultKMin, LinearSpectrumFactory.DefaultKMax);
-        _p22 = new RedshiftP22Quadrature(K, LinearSpectrumFactory.DefaultKMin, LinearSpectrumFactory.DefaultKMax);
-        _p13 = new RedshiftP13Quadrature(K, LinearSpectrumFactory.DefaultKMin, LinearSpectrumFactory.DefaultKMax);
+        _matter = new LoopQuadrature(K, qMin, qMax);
+        _p22 = new RedshiftP22Quadrature(K, qMin, qMax);
+        _p13 = new RedshiftP13Quadrature(K, qMin, qMax);
         var rule = GaussLegendreRule.Create(muNodes);
         _mu = rule.Nodes.Select(x => 0.5 * (x + 1.0)).ToArray();
         _muWeights = rule.Weights.Select(w => 0.5 * w).ToArray();
@@ -115,13 +120,16 @@ public sealed class OneLoopGalaxy
         var noWiggle = new double[n];
         var blockFull = new double[MuPolynomials.BlockSize];
         var blockNw = new double[MuPolynomials.BlockSize];
+        var atMu = new double[Monomials.Length + 6];
         for (int i = 0; i < n; i++)
         {
             double k = K[i];
             linear[i] = d2 * shape.Linear.Shape.Evaluate(k);
             noWiggle[i] = d2 * shape.Linear.NoWiggleShape.Evaluate(k);
-            Loop(blockFull, shape.Full, i, k, shape.Linear.Shape.Evaluate(k), t, d4);
-            Loop(blockNw, shape.NoWiggle, i, k, shape.Linear.NoWiggleShape.Evaluate(k), t, d4);
+            // The same b2² constant leaves both loops, so it leaves the resummed sum unchanged by the damping.
+            double constant = shape.NoWiggle.ConstantB2B2;
+            Loop(blockFull, shape.Full, i, k, shape.Linear.Shape.Evaluate(k), t, d4, constant);
+            Loop(blockNw, shape.NoWiggle, i, k, shape.Linear.NoWiggleShape.Evaluate(k), t, d4, constant);
             double wiggle = linear[i] - noWiggle[i];
             for (int j = 0; j < _mu.Length; j++)
             {
@@ -131,28 +139,39 @@ public sealed class OneLoopGalaxy
                 double treeIr = noWiggle[i] + (damping * (1.0 + x) * wiggle);
                 double leading = noWiggle[i] + (damping * wiggle);
                 double fm2 = f * mu2;
+                for (int m = 0; m < Monomials.Length; m++)
+                {
+                    double loopNw = includeLoops ? MuPolynomials.Evaluate(blockNw, Monomials[m], mu2) : 0.0;
+                    double loop = includeLoops ? loopNw + (damping * (MuPolynomials.Evaluate(blockFull, Monomials[m], mu2) - loopNw)) : 0.0;
+                    double tree = Monomials[m] switch
+                    {
+                        GalaxyMonomial.B1B1 => treeIr,
+                        GalaxyMonomial.B1 => 2.0 * fm2 * treeIr,
+                        GalaxyMonomial.One => fm2 * fm2 * treeIr,
+                        _ => 0.0,
+                    };
+                    atMu[m] = tree + loop;
+                }
+
+                // −2(c0 + c2 fμ² + c4 f²μ⁴) k² P_IR and −ck4 f⁴μ⁴ k⁴ (b1 + fμ²)² P_IR split by powers of b1.
+                double k2 = k * k * leading, fog = fm2 * fm2 * f * f * k * k * k * k * leading;
+                atMu[Monomials.Length + 0] = k2;
+                atMu[Monomials.Length + 1] = fm2 * k2;
+                atMu[Monomials.Length + 2] = fm2 * fm2 * k2;
+                atMu[Monomials.Length + 3] = fm2 * fm2 * fog;
+                atMu[Monomials.Length + 4] = 2.0 * fm2 * fog;
+                atMu[Monomials.Length + 5] = fog;
                 for (int l = 0; l < 3; l++)
                 {
                     double weight = _muWeights[j] * ((2 * GalaxyLayout.Multipoles[l]) + 1) * Legendre(GalaxyLayout.Multipoles[l], mu);
-                    foreach (var m in Enum.GetValues<GalaxyMonomial>())
+                    for (int m = 0; m < Monomials.Length; m++)
                     {
-                        double loopNw = includeLoops ? MuPolynomials.Evaluate(blockNw, m, mu2) : 0.0;
-                        double loop = includeLoops ? loopNw + (damping * (MuPolynomials.Evaluate(blockFull, m, mu2) - loopNw)) : 0.0;
-                        double tree = m switch
-                        {
-                            GalaxyMonomial.B1B1 => treeIr,
-                            GalaxyMonomial.B1 => 2.0 * fm2 * treeIr,
-                            GalaxyMonomial.One => fm2 * fm2 * treeIr,
-                            _ => 0.0,
-                        };
-                        values[(GalaxyLayout.LoopTerm(m, l) * n) + i] += weight * (tree + loop);
+                        values[(GalaxyLayout.LoopTerm(Monomials[m], l) * n) + i] += weight * atMu[m];
                     }
 
-                    double k2 = k * k * leading, fog = fm2 * fm2 * k * k * k * k * leading;
-                    ReadOnlySpan<double> counterterms = [k2, fm2 * k2, fm2 * fm2 * k2, fm2 * fm2 * fog, 2.0 * fm2 * fog, fog];
-                    for (int c = 0; c < counterterms.Length; c++)
+                    for (int c = 0; c < 6; c++)
                     {
-                        values[((GalaxyLayout.CountertermStart + (3 * c) + l) * n) + i] += weight * counterterms[c];
+                        values[((GalaxyLayout.CountertermStart + (3 * c) + l) * n) + i] += weight * atMu[Monomials.Length + c];
                     }
                 }
             }
@@ -187,10 +206,10 @@ public sealed class OneLoopGalaxy
     }
 
     /// <summary>One-loop μ-polynomials at z: every one-loop term is quadratic in the shape, so the shape's integrals scale by D⁴.</summary>
-    private static void Loop(double[] block, SpectrumIntegrals s, int i, double k, double shapeAtK, RedshiftTimeInputs t, double d4)
+    private static void Loop(double[] block, SpectrumIntegrals s, int i, double k, double shapeAtK, RedshiftTimeInputs t, double d4, double constantB2B2)
     {
         Array.Clear(block);
-        RedshiftP22Terms.Add(block, s.P22, i, t, s.ConstantB2B2);
+        RedshiftP22Terms.Add(block, s.P22, i, t, constantB2B2);
         RedshiftP13Terms.Add(block, s.Matter, s.Displacement, s.SigmaV2, i, k, shapeAtK, t);
         for (int c = 0; c < block.Length; c++)
         {

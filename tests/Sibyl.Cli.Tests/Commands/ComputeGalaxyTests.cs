@@ -25,7 +25,8 @@ public class ComputeGalaxyTests
     [Fact]
     public void Stochastic_constant_adds_to_the_monopole_only()
     {
-        // P_stoch = stoch0 enters P0 alone (its μ average is itself, higher multipoles vanish).
+        // P_stoch = stoch0 enters P0 alone (its μ average is itself, higher multipoles vanish). Values of
+        // order 1e4 (Mpc/h)³ written with round-trip precision: 1e-8 absolute is far above their rounding.
         var without = Rows(CliRun.Of("compute", "galaxy", "--nk", "3", "--kmin", "0.05", "--kmax", "0.1"));
         var with = Rows(CliRun.Of("compute", "galaxy", "stoch0=500", "--nk", "3", "--kmin", "0.05", "--kmax", "0.1"));
 

@@ -56,4 +56,62 @@ public class ComputeMatterTests
         Assert.Equal(2, run.ExitCode);
         Assert.Contains("must end in .png", run.Stderr, StringComparison.Ordinal);
     }
+
+    [Theory]
+    [InlineData("matter", "--kmin", "2e-5")]
+    [InlineData("galaxy", "--kmax", "50")]
+    public void One_loop_outputs_refuse_k_too_close_to_the_table_edges(string output, string option, string value)
+    {
+        var run = CliRun.Of("compute", output, option, value);
+
+        Assert.Equal(2, run.ExitCode);
+        Assert.StartsWith("sibyl: --kmin/--kmax: one-loop outputs need k in [0.0001, 10] h/Mpc", run.Stderr, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void User_table_feeds_the_one_loop_outputs()
+    {
+        // A table written by compute linear at z = 0 over 1e-5–50 h/Mpc and read back (after a comment line
+        // and a header) must give back the fitting formula's matter spectrum within the loops' truncation
+        // at the table's smaller upper end and the spline error between its 2000 nodes: 1e-3.
+        string folder = Directory.CreateTempSubdirectory("sibyl-cli-").FullName;
+        string csv = Path.Combine(folder, "linear.csv");
+        Assert.Equal(0, CliRun.Of("compute", "linear", "--kmin", "1e-5", "--kmax", "50", "--nk", "2000", "--out", csv).ExitCode);
+        string table = Path.Combine(folder, "table.txt");
+        File.WriteAllLines(table, new[] { "# invented test table" }.Concat(File.ReadAllLines(csv).Select(l => string.Join(' ', l.Split(',').Take(2)))));
+
+        var fromTable = CliRun.Of("compute", "matter", "--table", table, "--kmin", "0.01", "--kmax", "0.3", "--nk", "5");
+        var fromFit = CliRun.Of("compute", "matter", "--kmin", "0.01", "--kmax", "0.3", "--nk", "5");
+        var galaxy = CliRun.Of("compute", "galaxy", "--table", table, "--kmin", "0.01", "--kmax", "0.3", "--nk", "3");
+
+        Assert.Equal(0, fromTable.ExitCode);
+        Assert.Equal(0, galaxy.ExitCode);
+        var a = fromTable.Stdout.TrimEnd('\n').Split('\n').Skip(1).Select(l => double.Parse(l.Split(',')[6], CultureInfo.InvariantCulture)).ToArray();
+        var b = fromFit.Stdout.TrimEnd('\n').Split('\n').Skip(1).Select(l => double.Parse(l.Split(',')[6], CultureInfo.InvariantCulture)).ToArray();
+        for (int i = 0; i < a.Length; i++)
+        {
+            Assert.Equal(1.0, a[i] / b[i], 1e-3);
+        }
+
+        Directory.Delete(folder, recursive: true);
+    }
+
+    [Fact]
+    public void Missing_output_folder_is_reported_before_any_work()
+    {
+        string missing = Path.Combine(Path.GetTempPath(), "sibyl-" + Guid.NewGuid().ToString("N"), "p.csv");
+        var run = CliRun.Of("compute", "matter", "--out", missing);
+
+        Assert.Equal(2, run.ExitCode);
+        Assert.StartsWith("sibyl: --out: folder", run.Stderr, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Flag_options_take_no_value()
+    {
+        var run = CliRun.Of("compute", "galaxy", "--basis=no");
+
+        Assert.Equal(2, run.ExitCode);
+        Assert.Contains("--basis: takes no value", run.Stderr, StringComparison.Ordinal);
+    }
 }
