@@ -17,7 +17,7 @@ public class OneLoopMatterBenchmark
     private OneLoopMatter _calculator = null!;
     private CosmologyParameters _parameters = null!;
     private CosmologyModel _model = null!;
-    private OneLoopMatter.PreparedShape _prepared = null!;
+    private PreparedMatterShape _prepared = null!;
 
     [GlobalSetup]
     public void Setup()
@@ -35,7 +35,7 @@ public class OneLoopMatterBenchmark
     public CosmologyModel Linear() => CosmologyModel.Create(_parameters);
 
     [Benchmark(Description = "loop integrals of both spectra")]
-    public OneLoopMatter.PreparedShape Loops() => _calculator.Prepare(_model.Linear);
+    public PreparedMatterShape Loops() => _calculator.Prepare(_model.Linear);
 
     [Benchmark(Description = "time coefficients and assembly at one z")]
     public MatterSpectrum Assembly() => _calculator.Compute(_prepared, _model, 0.5);

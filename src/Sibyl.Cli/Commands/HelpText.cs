@@ -50,10 +50,12 @@ internal static class HelpText
 
             options:
               --kmin K   [{{PointArguments.DefaultKMin:G}}] smallest output k, h/Mpc
-              --kmax K   [{{PointArguments.DefaultKMax:G}}] largest output k, h/Mpc
+              --kmax K   [{{PointArguments.DefaultKMax:G}}] largest output k, h/Mpc (matter and galaxy need k a factor
+                         10 inside the linear table: [1e-4, 10] for the fit)
               --nk N     [{{PointArguments.DefaultKCount}}] number of log-spaced k values
               --table F  linear P(k) at z = 0 of the GR counterpart, two columns k, P (replaces the fit;
-                         its amplitude replaces ln10As/sigma8; never extrapolated)
+                         its amplitude replaces ln10As/sigma8; never extrapolated; loops integrate
+                         over its range only, so give it a wide one, e.g. 1e-5 to 50 h/Mpc)
               --out F    write the CSV to F (atomically) instead of stdout
               --plot F   also write a PNG figure to F
               --basis    compute galaxy: also write every basis term (one column each)

@@ -34,22 +34,19 @@ public sealed class OneLoopMatter
     /// <summary>Output wavenumbers, h/Mpc.</summary>
     public double[] K { get; }
 
-    /// <summary>The loop integrals of one linear shape and of its no-wiggle partner, and Σ² in growth units.</summary>
-    public sealed record PreparedShape(LinearSpectrum Linear, MomentumIntegrals Full, MomentumIntegrals NoWiggle, double Sigma2);
-
     /// <summary>Computes the momentum integrals of a linear spectrum (the expensive, cosmology-dependent step).</summary>
     /// <exception cref="ArgumentException">The spectrum's table does not span the plan's integration range.</exception>
-    public PreparedShape Prepare(LinearSpectrum linear)
+    public PreparedMatterShape Prepare(LinearSpectrum linear)
     {
         ArgumentNullException.ThrowIfNull(linear);
         var full = new MomentumIntegrals(K.Length);
         var noWiggle = new MomentumIntegrals(K.Length);
         _quadrature.Compute(Sample(linear.Shape), Sample(linear.NoWiggleShape), full, noWiggle);
-        return new PreparedShape(linear, full, noWiggle, BaoDamping.Sigma2(linear.NoWiggleShape, linear.BaoScale));
+        return new PreparedMatterShape(linear, full, noWiggle, BaoDamping.Sigma2(linear.NoWiggleShape, linear.BaoScale));
     }
 
     /// <summary>Combines prepared integrals with the time coefficients of one redshift and gravity model.</summary>
-    public MatterSpectrum Evaluate(PreparedShape shape, TimeCoefficients time)
+    public MatterSpectrum Evaluate(PreparedMatterShape shape, TimeCoefficients time)
     {
         ArgumentNullException.ThrowIfNull(shape);
         ArgumentNullException.ThrowIfNull(time);
@@ -94,7 +91,7 @@ public sealed class OneLoopMatter
     }
 
     /// <summary>Evaluates already prepared integrals for <paramref name="model"/> at redshift <paramref name="z"/> (in [0, 20]).</summary>
-    public MatterSpectrum Compute(PreparedShape shape, CosmologyModel model, double z)
+    public MatterSpectrum Compute(PreparedMatterShape shape, CosmologyModel model, double z)
     {
         ArgumentNullException.ThrowIfNull(model);
         return Evaluate(shape, TimeCoefficientSolver.Solve(model.Background, model.Gravity, 1.0 / (1.0 + z)));

@@ -15,12 +15,7 @@ public sealed record GalaxySpectrum(BasisSpectra Basis, double[] Linear, double[
     /// <exception cref="ArgumentOutOfRangeException">ℓ is not 0, 2 or 4.</exception>
     public double[] Multipole(int ell, ReadOnlySpan<double> nuisance)
     {
-        int slot = Array.IndexOf(GalaxyLayout.Multipoles, ell);
-        if (slot < 0)
-        {
-            throw new ArgumentOutOfRangeException(nameof(ell), ell, "multipole must be 0, 2 or 4");
-        }
-
+        int slot = Multipoles.Slot(ell);
         var result = new double[Linear.Length];
         Basis.Assemble(nuisance, slot, result);
         return result;

@@ -53,37 +53,9 @@ public sealed class OneLoopGalaxy
     /// <summary>Output wavenumbers, h/Mpc.</summary>
     public double[] K { get; }
 
-    /// <summary>Loop integrals of one linear shape (growth units) with and without wiggles.</summary>
-    public sealed class PreparedShape
-    {
-        internal PreparedShape(LinearSpectrum linear, SpectrumIntegrals full, SpectrumIntegrals noWiggle, double sigma2, double deltaSigma2)
-        {
-            Linear = linear;
-            Full = full;
-            NoWiggle = noWiggle;
-            Sigma2 = sigma2;
-            DeltaSigma2 = deltaSigma2;
-        }
-
-        /// <summary>The linear spectrum.</summary>
-        public LinearSpectrum Linear { get; }
-
-        internal SpectrumIntegrals Full { get; }
-
-        internal SpectrumIntegrals NoWiggle { get; }
-
-        /// <summary>Σ² in growth units.</summary>
-        public double Sigma2 { get; }
-
-        /// <summary>δΣ² in growth units.</summary>
-        public double DeltaSigma2 { get; }
-    }
-
-    /// <summary>Every integral of one spectrum.</summary>
-    internal sealed record SpectrumIntegrals(MomentumIntegrals Matter, RedshiftP22Integrals P22, double[] Displacement, double SigmaV2, double ConstantB2B2);
-
     /// <summary>Computes the momentum integrals of a linear shape (once per linear spectrum).</summary>
-    public PreparedShape Prepare(LinearSpectrum linear)
+    /// <exception cref="ArgumentException">The shape's table does not span the plans' range.</exception>
+    public PreparedGalaxyShape Prepare(LinearSpectrum linear)
     {
         ArgumentNullException.ThrowIfNull(linear);
         var full = Sample(linear.Shape);
@@ -94,7 +66,7 @@ public sealed class OneLoopGalaxy
         var p22Full = new RedshiftP22Integrals(K.Length);
         var p22Nw = new RedshiftP22Integrals(K.Length);
         _p22.Compute(full, noWiggle, p22Full, p22Nw);
-        return new PreparedShape(
+        return new PreparedGalaxyShape(
             linear,
             Integrals(full, matterFull, p22Full),
             Integrals(noWiggle, matterNw, p22Nw),
@@ -107,7 +79,7 @@ public sealed class OneLoopGalaxy
     /// <param name="time">Time coefficients at the output redshift.</param>
     /// <param name="mappingScale">1 for redshift space; 0 switches the velocity mapping off (real space).</param>
     /// <param name="includeLoops">False keeps only the IR-resummed tree level (for checks against linear theory).</param>
-    public GalaxySpectrum Evaluate(PreparedShape shape, TimeCoefficients time, double mappingScale = 1.0, bool includeLoops = true)
+    public GalaxySpectrum Evaluate(PreparedGalaxyShape shape, TimeCoefficients time, double mappingScale = 1.0, bool includeLoops = true)
     {
         ArgumentNullException.ThrowIfNull(shape);
         ArgumentNullException.ThrowIfNull(time);
@@ -163,7 +135,7 @@ public sealed class OneLoopGalaxy
                 atMu[Monomials.Length + 5] = fog;
                 for (int l = 0; l < 3; l++)
                 {
-                    double weight = _muWeights[j] * ((2 * GalaxyLayout.Multipoles[l]) + 1) * Legendre(GalaxyLayout.Multipoles[l], mu);
+                    double weight = _muWeights[j] * ((2 * GalaxyLayout.Multipoles[l]) + 1) * Multipoles.Legendre(GalaxyLayout.Multipoles[l], mu);
                     for (int m = 0; m < Monomials.Length; m++)
                     {
                         values[(GalaxyLayout.LoopTerm(Monomials[m], l) * n) + i] += weight * atMu[m];
@@ -185,28 +157,16 @@ public sealed class OneLoopGalaxy
         return new GalaxySpectrum(new BasisSpectra(GalaxyLayout.Layout, (double[])K.Clone(), values), linear, noWiggle, t.MappedGrowthRate, sigma2, deltaSigma2);
     }
 
-    /// <summary>Prepares and evaluates the model's own linear spectrum at redshift <paramref name="z"/>.</summary>
+    /// <summary>Prepares and evaluates the model's own linear spectrum at redshift <paramref name="z"/> (in [0, 20]).</summary>
+    /// <exception cref="ArgumentException">The model's linear table does not span the plans' range.</exception>
     public GalaxySpectrum Compute(CosmologyModel model, double z)
     {
         ArgumentNullException.ThrowIfNull(model);
         return Evaluate(Prepare(model.Linear), TimeCoefficientSolver.Solve(model.Background, model.Gravity, 1.0 / (1.0 + z)));
     }
 
-    /// <summary>Legendre polynomial L_ℓ(μ) for ℓ = 0, 2, 4.</summary>
-    public static double Legendre(int ell, double mu)
-    {
-        double mu2 = mu * mu;
-        return ell switch
-        {
-            0 => 1.0,
-            2 => 0.5 * ((3.0 * mu2) - 1.0),
-            4 => ((35.0 * mu2 * mu2) - (30.0 * mu2) + 3.0) / 8.0,
-            _ => throw new ArgumentOutOfRangeException(nameof(ell), ell, "multipole must be 0, 2 or 4"),
-        };
-    }
-
     /// <summary>One-loop μ-polynomials at z: every one-loop term is quadratic in the shape, so the shape's integrals scale by D⁴.</summary>
-    private static void Loop(double[] block, SpectrumIntegrals s, int i, double k, double shapeAtK, RedshiftTimeInputs t, double d4, double constantB2B2)
+    private static void Loop(double[] block, GalaxySpectrumIntegrals s, int i, double k, double shapeAtK, RedshiftTimeInputs t, double d4, double constantB2B2)
     {
         Array.Clear(block);
         RedshiftP22Terms.Add(block, s.P22, i, t, constantB2B2);
@@ -217,11 +177,11 @@ public sealed class OneLoopGalaxy
         }
     }
 
-    private SpectrumIntegrals Integrals(LogSampledSpectrum spectrum, MomentumIntegrals matter, RedshiftP22Integrals p22)
+    private GalaxySpectrumIntegrals Integrals(LogSampledSpectrum spectrum, MomentumIntegrals matter, RedshiftP22Integrals p22)
     {
         var displacement = new double[DisplacementKernels.Count * K.Length];
         double sigmaV2 = _p13.Compute(spectrum, displacement);
-        return new SpectrumIntegrals(matter, p22, displacement, sigmaV2, SquaredSpectrumIntegral(spectrum));
+        return new GalaxySpectrumIntegrals(matter, p22, displacement, sigmaV2, SquaredSpectrumIntegral(spectrum));
     }
 
     /// <summary>lim_{k→0} 2∫d³q/(2π)³ P(q)P(|k−q|) = (1/π²)∫dq q² P², by Simpson's rule on the table in ln q.</summary>

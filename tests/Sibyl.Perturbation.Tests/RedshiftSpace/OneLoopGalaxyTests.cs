@@ -13,7 +13,7 @@ public class OneLoopGalaxyTests
     private static readonly double[] K = LogGridFunction.LogGrid(0.01, 0.3, 24);
     private static readonly CosmologyModel Planck = CosmologyModel.Create(new CosmologyParameters());
     private static readonly OneLoopGalaxy Galaxy = new(K);
-    private static readonly OneLoopGalaxy.PreparedShape Prepared = Galaxy.Prepare(Planck.Linear);
+    private static readonly PreparedGalaxyShape Prepared = Galaxy.Prepare(Planck.Linear);
     private static readonly TimeCoefficients Time = TimeCoefficientSolver.Solve(Planck.Background, Planck.Gravity, 1.0 / (1.0 + Z));
 
     [Fact]
