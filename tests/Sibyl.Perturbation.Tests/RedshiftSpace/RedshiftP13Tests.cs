@@ -1,6 +1,4 @@
 using MathNet.Numerics.Integration;
-using Sibyl.Cosmology;
-using Sibyl.Cosmology.Parameters;
 using Sibyl.Perturbation.Kernels;
 using Sibyl.Perturbation.Loops;
 using Sibyl.Perturbation.RedshiftSpace;
@@ -10,10 +8,8 @@ namespace Sibyl.Perturbation.Tests.RedshiftSpace;
 
 public class RedshiftP13Tests
 {
-    private const double Z = 0.5;
-    private static readonly CosmologyModel Planck = CosmologyModel.Create(new CosmologyParameters());
-    private static readonly TimeCoefficients Time = TimeCoefficientSolver.Solve(Planck.Background, Planck.Gravity, 1.0 / (1.0 + Z));
-    private static readonly LogSampledSpectrum Spectrum = LinearAtZ();
+    private static readonly TimeCoefficients Time = PlanckAtHalf.Time;
+    private static readonly LogSampledSpectrum Spectrum = PlanckAtHalf.Spectrum;
 
     [Theory]
     [InlineData(0.05, 0.3, 1.5, 0.0, 0.0)]
@@ -106,12 +102,5 @@ public class RedshiftP13Tests
         double integral = GaussKronrodRule.Integrate(Radial, Math.Log(Spectrum.QMin), lnK, out _, out _, 1e-5, 10, 15)
                           + GaussKronrodRule.Integrate(Radial, lnK, Math.Log(Spectrum.QMax), out _, out _, 1e-5, 10, 15);
         return 6.0 * z.Z1(kv) * Spectrum.Evaluate(k) * integral / Math.Pow(2.0 * Math.PI, 3);
-    }
-
-    private static LogSampledSpectrum LinearAtZ()
-    {
-        double d = Time.D;
-        var shape = Planck.Linear.Shape;
-        return new LogSampledSpectrum(shape.Values.ToArray().Select(p => p * d * d).ToArray(), shape.KMin, shape.KMax);
     }
 }

@@ -1,6 +1,4 @@
 using MathNet.Numerics.Integration;
-using Sibyl.Cosmology;
-using Sibyl.Cosmology.Parameters;
 using Sibyl.Perturbation.Kernels;
 using Sibyl.Perturbation.Loops;
 using Sibyl.Perturbation.RedshiftSpace;
@@ -10,10 +8,8 @@ namespace Sibyl.Perturbation.Tests.RedshiftSpace;
 
 public class RedshiftP22Tests
 {
-    private static readonly CosmologyModel Planck = CosmologyModel.Create(new CosmologyParameters());
-    private static readonly TimeCoefficients Time = TimeCoefficientSolver.Solve(Planck.Background, Planck.Gravity, 0.5);
-    private static readonly LogSampledSpectrum Spectrum = new(
-        Planck.Linear.Shape.Values.ToArray().Select(p => p * Time.D * Time.D).ToArray(), Planck.Linear.Shape.KMin, Planck.Linear.Shape.KMax);
+    private static readonly TimeCoefficients Time = PlanckAtHalf.Time;
+    private static readonly LogSampledSpectrum Spectrum = PlanckAtHalf.Spectrum;
 
     [Theory]
     [InlineData(0.1, 0.5, 1.0, 0.0, 0.0)]
