@@ -1,5 +1,3 @@
-using System.Globalization;
-
 namespace Sibyl.Perturbation.Loops;
 
 /// <summary>
@@ -27,9 +25,6 @@ public sealed class LoopQuadrature
     /// <summary>Each output k must lie at least this factor inside both ends of the table range (dimensionless).</summary>
     public const double RangeMargin = 10.0;
 
-    // Caps the plan's resampling grid so that its scratch buffers fit comfortably on the stack.
-    private const double LargestTableRatio = 1e30;
-
     private readonly double[] _k;
     private readonly ProductGrid _grid;
     private readonly P13WeightTable _p13;
@@ -46,8 +41,8 @@ public sealed class LoopQuadrature
         double qMin = LogSampledSpectrum.DefaultQMin,
         double qMax = LogSampledSpectrum.DefaultQMax)
     {
-        ValidateRange(qMin, qMax);
-        ValidateWavenumbers(k, qMin, qMax);
+        PlanArguments.ValidateRange(qMin, qMax);
+        PlanArguments.ValidateWavenumbers(k, qMin, qMax);
         QMin = qMin;
         QMax = qMax;
         _k = k.ToArray();
@@ -116,68 +111,6 @@ public sealed class LoopQuadrature
     {
         ArgumentNullException.ThrowIfNull(spectrum, spectrumName);
         ArgumentNullException.ThrowIfNull(result, resultName);
-        if (!spectrum.HasSameRangeAs(QMin, QMax))
-        {
-            throw new ArgumentException(
-                string.Create(
-                    CultureInfo.InvariantCulture,
-                    $"The spectrum spans [{spectrum.QMin:R}, {spectrum.QMax:R}] h/Mpc but the plan was built for [{QMin:R}, {QMax:R}]."),
-                spectrumName);
-        }
-
-        if (result.KCount != KCount)
-        {
-            throw new ArgumentException(
-                string.Create(CultureInfo.InvariantCulture, $"The result holds {result.KCount} wavenumbers but the plan has {KCount}."),
-                resultName);
-        }
-    }
-
-    internal static void ValidateRange(double qMin, double qMax)
-    {
-        if (!double.IsFinite(qMin) || qMin <= 0.0)
-        {
-            throw new ArgumentException(string.Create(CultureInfo.InvariantCulture, $"qMin = {qMin:R} h/Mpc must be finite and positive."), nameof(qMin));
-        }
-
-        if (!double.IsFinite(qMax) || qMax <= qMin || qMax / qMin > LargestTableRatio)
-        {
-            throw new ArgumentException(
-                string.Create(CultureInfo.InvariantCulture, $"qMax = {qMax:R} h/Mpc must be finite, above qMin = {qMin:R} and at most {LargestTableRatio:R} times it."),
-                nameof(qMax));
-        }
-    }
-
-    internal static void ValidateWavenumbers(ReadOnlySpan<double> k, double qMin, double qMax)
-    {
-        if (k.IsEmpty)
-        {
-            throw new ArgumentException("At least one output wavenumber is needed.", nameof(k));
-        }
-
-        double lowest = qMin * RangeMargin;
-        double highest = qMax / RangeMargin;
-        for (int i = 0; i < k.Length; i++)
-        {
-            double value = k[i];
-            if (!double.IsFinite(value) || value <= 0.0)
-            {
-                throw new ArgumentException(string.Create(CultureInfo.InvariantCulture, $"k[{i}] = {value:R} h/Mpc must be finite and positive."), nameof(k));
-            }
-
-            if (value < lowest || value > highest)
-            {
-                throw new ArgumentException(
-                    string.Create(CultureInfo.InvariantCulture, $"k[{i}] = {value:R} h/Mpc lies outside [{lowest:R}, {highest:R}], the table range [{qMin:R}, {qMax:R}] less a factor {RangeMargin:R} margin."),
-                    nameof(k));
-            }
-
-            if (i > 0 && value <= k[i - 1])
-            {
-                throw new ArgumentException(
-                    string.Create(CultureInfo.InvariantCulture, $"k[{i}] = {value:R} h/Mpc does not exceed k[{i - 1}] = {k[i - 1]:R}: the grid must be strictly increasing."),
-                    nameof(k));
-            }
-        }
+        PlanArguments.ValidateInputs(spectrum, result.KCount, QMin, QMax, KCount, spectrumName, resultName);
     }
 }

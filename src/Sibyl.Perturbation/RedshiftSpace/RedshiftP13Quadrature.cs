@@ -16,8 +16,8 @@ public sealed class RedshiftP13Quadrature
     /// <summary>Builds the plan for output wavenumbers <paramref name="k"/> (validated by <see cref="LoopQuadrature"/>'s rules).</summary>
     public RedshiftP13Quadrature(ReadOnlySpan<double> k, double qMin = LogSampledSpectrum.DefaultQMin, double qMax = LogSampledSpectrum.DefaultQMax)
     {
-        LoopQuadrature.ValidateRange(qMin, qMax);
-        LoopQuadrature.ValidateWavenumbers(k, qMin, qMax);
+        PlanArguments.ValidateRange(qMin, qMax);
+        PlanArguments.ValidateWavenumbers(k, qMin, qMax);
         KCount = k.Length;
         _grid = new ProductGrid(qMin, qMax);
         _table = new P13WeightTable(_grid, k, DisplacementKernels.Count, DisplacementKernels.Evaluate);

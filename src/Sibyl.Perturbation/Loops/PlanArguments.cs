@@ -1,15 +1,13 @@
 using System.Globalization;
-using Sibyl.Perturbation.Loops;
-
-namespace Sibyl.Perturbation.RedshiftSpace;
+namespace Sibyl.Perturbation.Loops;
 
 /// <summary>
-/// The argument rules of a product-integration plan, identical to <see cref="LoopQuadrature"/>'s so that both
-/// plans accept the same k grids and table ranges (and could share this class).
+/// The argument rules every product-integration plan shares (matter and redshift space), so that all plans
+/// accept the same k grids and table ranges.
 /// </summary>
 internal static class PlanArguments
 {
-    // As in LoopQuadrature: caps the resampling grid so that its scratch buffers fit comfortably on the stack.
+    // Caps the resampling grid so that its scratch buffers fit comfortably on the stack.
     private const double LargestTableRatio = 1e30;
 
     /// <summary>Throws unless 0 &lt; qMin &lt; qMax ≤ 1e30·qMin, all finite (h/Mpc).</summary>
