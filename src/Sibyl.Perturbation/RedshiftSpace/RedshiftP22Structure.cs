@@ -3,7 +3,7 @@ namespace Sibyl.Perturbation.RedshiftSpace;
 /// <summary>
 /// The seven cosmology-independent momentum structures of the redshift-space second-order kernel
 /// Z2(q, p) = b1·U + V + b2/2 + bG2·W at p = k − q, line of sight ẑ, μ = k̂·ẑ, k_z = kμ, with
-/// U = α_s + b̃γ + f·L1, V = f μ²α_s + ṽ μ²γ + f²·L2, W = −γ (project lead's derivation).
+/// U = α_s + b̃γ + f·L1, V = f μ²α_s + ṽ μ²γ + f²·L2, W = −γ (derivation in DEVELOPERS.md, "Redshift space").
 /// </summary>
 /// <remarks>
 /// α_s = 1 + (μ_qp/2)(q/p + p/q) and γ = 1 − μ_qp² with μ_qp = q̂·p̂ (dimensionless);
