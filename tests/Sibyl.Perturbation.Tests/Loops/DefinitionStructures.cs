@@ -1,7 +1,7 @@
 namespace Sibyl.Perturbation.Tests.Loops;
 
 /// <summary>
-/// The mode-coupling structures evaluated literally from their definitions (the project lead's derivation),
+/// The mode-coupling structures evaluated literally from their definitions (derivation in DEVELOPERS.md),
 /// independent of the engine's rewritten forms; used by the brute-force referees.
 /// </summary>
 internal static class DefinitionStructures

@@ -17,7 +17,7 @@ public sealed class P13KernelTests
     [InlineData(1e4)]
     public void EdS_combination_of_P13_kernels_is_the_standard_reduced_kernel(double r)
     {
-        // Bernardeau et al. 2002, Phys. Rep. 367, 1 (from memory, verified by the project lead):
+        // Bernardeau et al. 2002, Phys. Rep. 367, 1 (from memory; verified here against the structures pointwise):
         // 1008 r² Σ X_s K_s(r) = B(r). Tolerance 1e-10 relative (brief): both sides are evaluated to ~1e-13.
         Span<double> kernels = stackalloc double[6];
         P13Kernels.Evaluate(r, kernels);

@@ -4,7 +4,7 @@ namespace Sibyl.Perturbation.Tests.Loops;
 /// The standard Einstein–de Sitter P_13 bracket
 /// B(r) = 12/r² − 158 + 100r² − 42r⁴ + (3/r³)(r² − 1)³(7r² + 2) ln|(1 + r)/(1 − r)|
 /// (Bernardeau, Colombi, Gaztañaga &amp; Scoccimarro 2002, Phys. Rep. 367, 1; quoted from memory and
-/// verified numerically by the project lead), with P13 = k³P(k)/(1008π²)∫dr P(kr) B(r).
+/// verified numerically against the structures of P13Structure), with P13 = k³P(k)/(1008π²)∫dr P(kr) B(r).
 /// Away from r ≈ 1 the closed form cancels badly, so there it is summed as a series in r² or 1/r².
 /// </summary>
 internal static class ReducedP13Kernel
