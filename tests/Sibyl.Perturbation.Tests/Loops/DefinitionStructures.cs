@@ -49,7 +49,7 @@ internal static class DefinitionStructures
         };
     }
 
-    /// <summary>Einstein–de Sitter coefficients X_s of the P_13 structures (project lead's derivation).</summary>
+    /// <summary>Einstein–de Sitter coefficients X_s of the P_13 structures (DEVELOPERS.md; checked in TimeCoefficientSolverTests).</summary>
     public static readonly double[] EdsP13Coefficients = [7.0 / 18.0, -2.0 / 9.0, 2.0 / 9.0, -8.0 / 63.0, 0.0, 0.0];
 
     /// <summary>Einstein–de Sitter weights of J_S in P22: F2 = α_s − (2/7)γ squared.</summary>

@@ -10,7 +10,7 @@ public sealed class LoopQuadraturePhysicsTests
     public void Fast_EdS_P13_equals_the_reduced_kernel_integral()
     {
         // P13_EdS = 4P(k)ΣX_s I_s(k) = k³P(k)/(1008π²)∫dr P(kr)B(r) (Bernardeau et al. 2002, Phys. Rep. 367, 1; from
-        // memory, verified by the project lead), the right side by a 1-D adaptive integral. Tolerance 1e-4:
+        // memory, verified numerically against the structures), the right side by a 1-D adaptive integral. Tolerance 1e-4:
         // ten times tighter than the 1e-3 target, since only resampling and quadrature differ (measured ≲ 2e-5).
         double[] k = [0.005, 0.02, 0.1, 0.3, 0.5];
         var plan = new LoopQuadrature(k);

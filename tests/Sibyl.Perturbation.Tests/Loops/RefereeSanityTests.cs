@@ -13,7 +13,7 @@ public sealed class RefereeSanityTests
     public void Referee_EdS_P13_matches_the_reduced_kernel_integral(double k)
     {
         // P13_EdS = 4P(k) Σ X_s I_s(k) = k³P(k)/(1008π²) ∫dr P(kr) B(r) (Bernardeau et al. 2002, Phys. Rep. 367, 1;
-        // from memory, verified by the project lead). The right side is a 1-D adaptive integral of the
+        // from memory, verified numerically against the structures). The right side is a 1-D adaptive integral of the
         // series-assisted bracket. Tolerance 1e-6: both sides are asked for 1e-8 and cancel by ≲ 10×.
         var referee = new BruteForceReferee(Spectrum);
         double structures = 0.0;
