@@ -92,10 +92,7 @@ public sealed class LoopQuadrature
     {
         ValidateInputs(first, firstResult, nameof(first), nameof(firstResult));
         ValidateInputs(second, secondResult, nameof(second), nameof(secondResult));
-        if (ReferenceEquals(firstResult, secondResult))
-        {
-            throw new ArgumentException("The two results must be distinct objects.", nameof(secondResult));
-        }
+        PlanArguments.RequireDistinct(firstResult, secondResult, nameof(secondResult));
 
         Span<double> resampledFirst = stackalloc double[_grid.Count + P22BandTable.Padding];
         Span<double> resampledSecond = stackalloc double[_grid.Count + P22BandTable.Padding];

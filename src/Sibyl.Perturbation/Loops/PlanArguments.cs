@@ -86,4 +86,13 @@ internal static class PlanArguments
                 resultName);
         }
     }
+
+    /// <summary>Throws unless the two results of a two-spectrum evaluation are different objects (one would overwrite the other).</summary>
+    public static void RequireDistinct(object firstResult, object secondResult, string secondName)
+    {
+        if (ReferenceEquals(firstResult, secondResult))
+        {
+            throw new ArgumentException("The two results must be distinct objects.", secondName);
+        }
+    }
 }

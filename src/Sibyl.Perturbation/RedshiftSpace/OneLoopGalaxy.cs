@@ -96,12 +96,13 @@ public sealed class OneLoopGalaxy
         for (int i = 0; i < n; i++)
         {
             double k = K[i];
-            linear[i] = d2 * shape.Linear.Shape.Evaluate(k);
-            noWiggle[i] = d2 * shape.Linear.NoWiggleShape.Evaluate(k);
+            double shapeFull = shape.Linear.Shape.Evaluate(k), shapeNw = shape.Linear.NoWiggleShape.Evaluate(k);
+            linear[i] = d2 * shapeFull;
+            noWiggle[i] = d2 * shapeNw;
             // The same b2² constant leaves both loops, so it leaves the resummed sum unchanged by the damping.
             double constant = shape.NoWiggle.ConstantB2B2;
-            Loop(blockFull, shape.Full, i, k, shape.Linear.Shape.Evaluate(k), t, d4, constant);
-            Loop(blockNw, shape.NoWiggle, i, k, shape.Linear.NoWiggleShape.Evaluate(k), t, d4, constant);
+            Loop(blockFull, shape.Full, i, k, shapeFull, t, d4, constant);
+            Loop(blockNw, shape.NoWiggle, i, k, shapeNw, t, d4, constant);
             double wiggle = linear[i] - noWiggle[i];
             for (int j = 0; j < _mu.Length; j++)
             {
