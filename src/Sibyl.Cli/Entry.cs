@@ -1,6 +1,9 @@
 using Sibyl.Cli.Arguments;
 using Sibyl.Cli.Commands;
 using Sibyl.Cosmology.Parameters;
+using Sibyl.Training.Runs;
+using Sibyl.Training.Specs;
+using Sibyl.Training.Storage;
 
 namespace Sibyl.Cli;
 
@@ -13,11 +16,17 @@ internal static class Entry
     /// <summary>A file could not be read or written.</summary>
     public const int IoError = 1;
 
+    /// <summary>A run finished, but some points failed (they are recorded).</summary>
+    public const int PointsFailed = 3;
+
+    /// <summary>Stopped by SIGINT or SIGTERM (128 + 2, the shell's convention for an interrupt).</summary>
+    public const int Interrupted = 130;
+
     /// <summary>Runs the command line and returns the process exit code.</summary>
-    public static int Run(string[] args) => Run(args, Console.Out, Console.Error);
+    public static int Run(string[] args) => Run(args, Console.Out, Console.Error, interactive: !Console.IsErrorRedirected);
 
     /// <summary>Runs with explicit streams, for tests.</summary>
-    public static int Run(string[] args, TextWriter stdout, TextWriter stderr)
+    public static int Run(string[] args, TextWriter stdout, TextWriter stderr, bool interactive = false)
     {
         try
         {
@@ -25,11 +34,20 @@ internal static class Entry
             {
                 [] or ["--help" or "-h" or "help"] => Help(stdout),
                 ["compute", .. var rest] => ComputeCommand.Run(rest, stdout, stderr),
+                ["plan", .. var rest] => PlanCommand.Run(rest, stdout, stderr),
+                ["run", .. var rest] => RunCommand.Run(rest, stdout, stderr, interactive),
+                ["merge", .. var rest] => MergeCommand.Run(rest, stdout, stderr),
                 _ => throw new UsageException($"unknown command '{args[0]}'; try sibyl --help"),
             };
         }
         catch (UsageException e)
         {
+            stderr.WriteLine($"sibyl: {e.Message}");
+            return UsageError;
+        }
+        catch (Exception e) when (e is GridSpecException or CorruptFileException or MergeException or RunConflictException)
+        {
+            // Bad input files: the message already names the file and every problem.
             stderr.WriteLine($"sibyl: {e.Message}");
             return UsageError;
         }

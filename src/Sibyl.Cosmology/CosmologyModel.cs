@@ -45,13 +45,21 @@ public sealed class CosmologyModel
         return new CosmologyModel(parameters, background, gravity, growthToday, LinearSpectrumFactory.FromFittingFormula(parameters, growthToday));
     }
 
-    /// <summary>Builds the model with a user's table of the general-relativity P_L(k, z = 0).</summary>
+    /// <summary>
+    /// Builds the model with a user's table of the general-relativity P_L(k, z = 0), k in h/Mpc, resampled over the
+    /// part of it inside [<paramref name="rangeMin"/>, <paramref name="rangeMax"/>].
+    /// </summary>
     /// <exception cref="ParameterOutOfRangeException">A parameter is out of range.</exception>
     /// <exception cref="ArgumentException">The table is invalid.</exception>
-    public static CosmologyModel CreateFromTable(CosmologyParameters parameters, IReadOnlyList<double> k, IReadOnlyList<double> power)
+    public static CosmologyModel CreateFromTable(
+        CosmologyParameters parameters,
+        IReadOnlyList<double> k,
+        IReadOnlyList<double> power,
+        double rangeMin = LinearSpectrumFactory.DefaultKMin,
+        double rangeMax = LinearSpectrumFactory.DefaultKMax)
     {
         var (background, gravity, growthToday) = Dynamics(parameters);
-        return new CosmologyModel(parameters, background, gravity, growthToday, LinearSpectrumFactory.FromTable(parameters, k, power, growthToday));
+        return new CosmologyModel(parameters, background, gravity, growthToday, LinearSpectrumFactory.FromTable(parameters, k, power, growthToday, rangeMin, rangeMax));
     }
 
     /// <summary>Growth of this model at redshift <paramref name="z"/>.</summary>

@@ -29,12 +29,12 @@ internal static class ComputeCommand
 
         if (outPath is not null)
         {
-            AtomicFile.RequireFolder(outPath, "--out");
+            OutputPath.RequireFolder(outPath, "--out");
         }
 
         if (plotPath is not null)
         {
-            AtomicFile.RequireFolder(plotPath, "--plot");
+            OutputPath.RequireFolder(plotPath, "--plot");
         }
 
         ComputeResult result = args[0] switch

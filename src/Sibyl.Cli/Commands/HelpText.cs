@@ -16,8 +16,56 @@ internal static class HelpText
           compute linear [name=value ...] [options]   linear spectrum P_lin and its no-wiggle partner P_nw
           compute matter [name=value ...] [options]   one-loop real-space matter spectrum, IR-resummed
           compute galaxy [name=value ...] [options]   one-loop redshift-space galaxy multipoles P0, P2, P4
+          plan SPEC [--out DESIGN]                    draw the training and held-out design of a grid spec
+          run DESIGN [--shard I/N] [options]          compute the design's points on all cores, resumably
+          merge DESIGN [FOLDER ...] [--out FILE]      join run folders (shards) into one training set
 
-        sibyl compute --help lists every parameter with its default, range and unit.
+        sibyl compute --help lists every parameter with its default, range and unit;
+        sibyl plan|run|merge --help describe their options. Grid specs: training-grids/README.md.
+        """;
+
+    public const string Plan = """
+        usage: sibyl plan SPEC [--out DESIGN]
+
+        Reads a grid spec (JSON; format in training-grids/README.md), checks it completely (every problem
+        is listed, exit code 2), and draws a maximin-improved Latin hypercube of training points
+        (McKay et al. 1979; Morris & Mitchell 1995) and a second, independent one of held-out points,
+        reproducible from the spec's seed. Prints the design file's path on stdout.
+
+        options:
+          --out DESIGN   [NAME.design, NAME from the spec file name] where to write the design
+          --help         this text
+        """;
+
+    public const string Run = """
+        usage: sibyl run DESIGN [--out FOLDER] [--shard I/N] [--threads N] [--retry-failed]
+
+        Computes every point of the design with the direct one-loop calculation, on all cores, and stores
+        results in chunk files written atomically into FOLDER. Run it again after an interruption (kill,
+        node failure, SIGTERM at a time limit) and it computes only the missing chunks. A point whose
+        calculation fails is stored with its error and listed at the end (exit code 3).
+
+        options:
+          --out FOLDER    [DESIGN with .run instead of .design] run folder, shared by all shards
+          --shard I/N     [0/1] compute only chunks c with c mod N = I (0 <= I < N), for a job array:
+                          e.g. --shard $SLURM_ARRAY_TASK_ID/$SLURM_ARRAY_TASK_COUNT with --array=0-(N-1)
+          --threads N     [number of cores] worker threads
+          --retry-failed  compute stored chunks with failed points again
+          --help          this text
+
+        exit codes: 0 done, 2 bad input, 3 some points failed, 130 interrupted (finished chunks kept)
+        """;
+
+    public const string Merge = """
+        usage: sibyl merge DESIGN [FOLDER ...] [--out FILE]
+
+        Joins the chunks of the run folders (default: DESIGN's .run folder) into one training set. Refuses,
+        listing every problem, when chunks are missing (naming the shards to rerun), damaged, from another
+        design or another build of Sibyl, or present twice with different contents.
+
+        options:
+          --out FILE   [DESIGN with .training instead of .design] the training set
+          --help       this text
         """;
 
     public static string Compute()

@@ -1,5 +1,6 @@
 using System.Globalization;
 using System.Text;
+using Sibyl.Training.Storage;
 
 namespace Sibyl.Cli.Output;
 
@@ -47,11 +48,12 @@ internal sealed class CsvTable(IReadOnlyList<string> columns)
     /// <summary>Writes to a temporary file beside <paramref name="path"/> and renames it into place.</summary>
     public void WriteFile(string path)
     {
-        AtomicFile.Write(path, stream =>
+        using var buffer = new MemoryStream();
+        using (var writer = new StreamWriter(buffer, new UTF8Encoding(false), bufferSize: -1, leaveOpen: true))
         {
-            using var writer = new StreamWriter(stream, new UTF8Encoding(false), bufferSize: -1, leaveOpen: true);
             Write(writer);
-            writer.Flush();
-        });
+        }
+
+        AtomicFile.WriteAllBytes(path, buffer.ToArray());
     }
 }

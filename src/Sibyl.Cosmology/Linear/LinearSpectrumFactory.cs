@@ -44,8 +44,16 @@ public static class LinearSpectrumFactory
     /// <param name="k">Wavenumbers in h/Mpc, strictly increasing, at least 8 values.</param>
     /// <param name="power">P_L(k, z = 0) in (Mpc/h)³, positive.</param>
     /// <param name="lcdmGrowthToday">D(a = 1) of the general-relativity counterpart.</param>
+    /// <param name="rangeMin">Smallest k of the resampled table when the table reaches below it, h/Mpc.</param>
+    /// <param name="rangeMax">Largest k of the resampled table when the table reaches above it, h/Mpc.</param>
     /// <exception cref="ArgumentException">The table is too short, not increasing, or has non-positive or non-finite values.</exception>
-    public static LinearSpectrum FromTable(CosmologyParameters parameters, IReadOnlyList<double> k, IReadOnlyList<double> power, double lcdmGrowthToday)
+    public static LinearSpectrum FromTable(
+        CosmologyParameters parameters,
+        IReadOnlyList<double> k,
+        IReadOnlyList<double> power,
+        double lcdmGrowthToday,
+        double rangeMin = DefaultKMin,
+        double rangeMax = DefaultKMax)
     {
         ArgumentNullException.ThrowIfNull(parameters);
         ArgumentNullException.ThrowIfNull(k);
@@ -74,7 +82,7 @@ public static class LinearSpectrumFactory
         }
 
         var spline = CubicSpline.InterpolateNatural(lnK, lnP);
-        double kMin = Math.Max(k[0], DefaultKMin), kMax = Math.Min(k[^1], DefaultKMax);
+        double kMin = Math.Max(k[0], Math.Max(rangeMin, DefaultKMin)), kMax = Math.Min(k[^1], Math.Min(rangeMax, DefaultKMax));
         double growthSquared = lcdmGrowthToday * lcdmGrowthToday;
         var shape = LogGridFunction.Sample(q => Math.Exp(spline.Interpolate(Math.Log(q))) / growthSquared, kMin, kMax, GridPoints);
         var fit = new EisensteinHu(parameters.OmegaBaryon, parameters.OmegaCdm, parameters.H, parameters.CmbTemperature);

@@ -1,0 +1,113 @@
+using Sibyl.Cosmology;
+using Sibyl.Cosmology.Linear;
+using Sibyl.Perturbation.Matter;
+using Sibyl.Perturbation.RedshiftSpace;
+using Sibyl.Perturbation.Spectra;
+using Sibyl.Perturbation.TimeDependence;
+using Sibyl.Training.Design;
+using Sibyl.Training.Linear;
+using Sibyl.Training.Specs;
+
+namespace Sibyl.Training.Runs;
+
+/// <summary>
+/// The direct calculation of one design point: every basis term over the spec's k grid at each of the point's
+/// redshifts, as one array (redshift-major, then term-major, then k). The quadrature plans depend only on the
+/// k grid and the linear table range, so they are built once and shared by all threads (they keep no state
+/// between calls); the loop integrals of a point's linear spectrum are computed once and reused for each redshift.
+/// </summary>
+public sealed class PointCalculator
+{
+    private readonly TrainingDesign _design;
+    private readonly OneLoopMatter? _matter;
+    private readonly OneLoopGalaxy? _galaxy;
+    private readonly ExternalLinearProvider? _provider;
+
+    /// <summary>Builds the plans for <paramref name="design"/>'s k grid.</summary>
+    public PointCalculator(TrainingDesign design)
+    {
+        ArgumentNullException.ThrowIfNull(design);
+        _design = design;
+        var spec = design.Spec;
+        var k = spec.K.ToArray();
+        double qMin = spec.Linear?.KMin ?? LinearSpectrumFactory.DefaultKMin;
+        double qMax = spec.Linear?.KMax ?? LinearSpectrumFactory.DefaultKMax;
+        if (spec.Output == OutputKind.Matter)
+        {
+            _matter = new OneLoopMatter(k, qMin, qMax);
+        }
+        else
+        {
+            _galaxy = new OneLoopGalaxy(k, OneLoopGalaxy.DefaultMuNodes, qMin, qMax);
+        }
+
+        _provider = spec.Linear is { } command ? new ExternalLinearProvider(command) : null;
+        Layout = TrainingOutput.Layout(spec);
+        ValuesPerPoint = TrainingOutput.ValuesPerPoint(spec);
+    }
+
+    /// <summary>The basis layout of every point's spectra.</summary>
+    public BasisLayout Layout { get; }
+
+    /// <summary>Numbers per point: redshifts × terms × k values.</summary>
+    public int ValuesPerPoint { get; }
+
+    /// <summary>Computes point <paramref name="index"/>.</summary>
+    /// <exception cref="Exception">Anything the calculation or the user's linear program throws; the run records it.</exception>
+    public double[] Compute(int index, CancellationToken cancellation)
+    {
+        var spec = _design.Spec;
+        var varied = _design.Point(index);
+        var parameters = GridPoint.Cosmology(spec, varied);
+        CosmologyModel model;
+        if (_provider is null)
+        {
+            model = CosmologyModel.Create(parameters);
+        }
+        else
+        {
+            var (k, p) = _provider.Fetch(parameters, index, cancellation);
+            model = CosmologyModel.CreateFromTable(parameters, k, p, spec.Linear!.KMin, spec.Linear.KMax);
+        }
+
+        var redshifts = GridPoint.Redshifts(spec, varied);
+        var values = new double[ValuesPerPoint];
+        int block = Layout.Terms.Count * spec.K.Count;
+        if (_matter is not null)
+        {
+            var shape = _matter.Prepare(model.Linear);
+            for (int r = 0; r < redshifts.Length; r++)
+            {
+                Copy(_matter.Compute(shape, model, redshifts[r]).Basis, values.AsSpan(r * block, block));
+            }
+        }
+        else
+        {
+            var shape = _galaxy!.Prepare(model.Linear);
+            for (int r = 0; r < redshifts.Length; r++)
+            {
+                var time = TimeCoefficientSolver.Solve(model.Background, model.Gravity, 1.0 / (1.0 + redshifts[r]));
+                Copy(_galaxy.Evaluate(shape, time).Basis, values.AsSpan(r * block, block));
+            }
+        }
+
+        foreach (double v in values)
+        {
+            if (!double.IsFinite(v))
+            {
+                throw new ArithmeticException("the calculation produced a non-finite value");
+            }
+        }
+
+        return values;
+    }
+
+    private static void Copy(BasisSpectra basis, Span<double> destination)
+    {
+        int n = basis.K.Length;
+        for (int t = 0; t < basis.Layout.Terms.Count; t++)
+        {
+            basis.Term(t).CopyTo(destination.Slice(t * n, n));
+        }
+    }
+}
