@@ -132,10 +132,9 @@ public static class GaussianProcessRegression
                     CultureInfo.InvariantCulture,
                     $"The covariance matrix is not numerically positive definite at noise variance {hyperparameters.NoiseVariance:R}; raise it."),
                 nameof(hyperparameters));
-        double[] alpha = state.Alpha.Transpose().ToRowMajorArray();
-        double[]? factor = keepCholeskyFactor ? state.Cholesky.Factor.ToRowMajorArray() : null;
         return GaussianProcessModel.Own(
-            likelihood.Kernel, hyperparameters, inputs.ToRowMajorArray(), alpha, outputMean, outputScale, factor, state.Value);
+            likelihood.Kernel, hyperparameters, inputs.ToRowMajorArray(), state.Alpha, outputMean, outputScale,
+            keepCholeskyFactor ? state.Factor : null, state.Value);
     }
 
     /// <summary>ỹ_j = (y_j − mean_j)/scale_j with scale_j the root-mean-square deviation (1 for a constant output).</summary>
