@@ -19,6 +19,9 @@ internal static class Entry
     /// <summary>A run finished, but some points failed (they are recorded).</summary>
     public const int PointsFailed = 3;
 
+    /// <summary>An emulator check found errors above the limit the user set.</summary>
+    public const int CheckFailed = 4;
+
     /// <summary>Stopped by SIGINT or SIGTERM (128 + 2, the shell's convention for an interrupt).</summary>
     public const int Interrupted = 130;
 
@@ -37,6 +40,8 @@ internal static class Entry
                 ["plan", .. var rest] => PlanCommand.Run(rest, stdout, stderr),
                 ["run", .. var rest] => RunCommand.Run(rest, stdout, stderr, interactive),
                 ["merge", .. var rest] => MergeCommand.Run(rest, stdout, stderr),
+                ["fit", .. var rest] => FitCommand.Run(rest, stdout, stderr),
+                ["check", .. var rest] => CheckCommand.Run(rest, stdout, stderr),
                 _ => throw new UsageException($"unknown command '{args[0]}'; try sibyl --help"),
             };
         }

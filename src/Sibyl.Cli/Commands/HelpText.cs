@@ -19,9 +19,11 @@ internal static class HelpText
           plan SPEC [--out DESIGN]                    draw the training and held-out design of a grid spec
           run DESIGN [--shard I/N] [options]          compute the design's points on all cores, resumably
           merge DESIGN [FOLDER ...] [--out FILE]      join run folders (shards) into one training set
+          fit TRAINING [options]                      fit a PCA + Gaussian-process emulator, validate it on held-out points
+          check EMULATOR [options]                    compare an emulator with fresh direct runs in its box
 
         sibyl compute --help lists every parameter with its default, range and unit;
-        sibyl plan|run|merge --help describe their options. Grid specs: training-grids/README.md.
+        sibyl plan|run|merge|fit|check --help describe their options. Grid specs: training-grids/README.md.
         """;
 
     public const string Plan = """
@@ -119,4 +121,48 @@ internal static class HelpText
         string unit = d.Unit.Length > 0 ? " " + d.Unit : "";
         text.Append(CultureInfo.InvariantCulture, $"  {d.Name,-11} [{value}{unit}] in {d.Range}: {d.Meaning}\n");
     }
+
+    public const string Fit = """
+        usage: sibyl fit TRAINING [--out EMULATOR] [--report PREFIX] [options]
+
+        Fits an emulator of every basis term of the training set: per term (and redshift, when the grid lists
+        fixed redshifts) ln of the term where it is positive everywhere, else the term over its RMS at k;
+        principal components keeping the largest training reconstruction error below --pca-tolerance;
+        Gaussian processes (Rasmussen & Williams 2006) with a polynomial trend for the component
+        coefficients, hyperparameters by maximum marginal likelihood. Then compares it with the held-out
+        points and writes the report: per-k error percentiles (50, 90, 99, max) for every term as text
+        (PREFIX.txt) and figure (PREFIX.png), with the worst points named.
+
+        options:
+          --out EMULATOR       [TRAINING with .emulator] the emulator file
+          --report PREFIX      [EMULATOR without extension, then -heldout] report files PREFIX.txt, PREFIX.png
+          --kernel K           [matern52] matern52 or se (squared exponential); ARD length scales
+          --separate N         [4] leading components of each term with a Gaussian process of their own;
+                               the rest share one (0: one process per term, fastest to predict)
+          --trend N            [2] degree of the polynomial trend (0, 1, 2)
+          --pca-tolerance E    [1e-4] largest reconstruction error (ln units, or RMS units for signed terms)
+          --hyper-points N     [400] training points used to optimise hyperparameters (all are conditioned on)
+          --restarts N         [2] optimiser restarts
+          --variance           keep the Cholesky factors so that predictive variances are available
+                               (n^2 numbers per process: 32 MB each at 2000 training points)
+          --threads N          [number of cores] processes fitted in parallel
+          --help               this text
+        """;
+
+    public const string Check = """
+        usage: sibyl check EMULATOR [--points N] [--seed S] [--report PREFIX] [--max-error E]
+
+        Draws N fresh points in the emulator's box (a new Latin hypercube, neither training nor held-out),
+        runs the direct calculation there on all cores and compares: the same report as sibyl fit. This is
+        how to decide whether to trust an emulator before publishing with it.
+
+        options:
+          --points N      [50] fresh points
+          --seed S        [derived from the grid's seed] seed of the fresh points
+          --report PREFIX [EMULATOR without extension, then -check] report files PREFIX.txt, PREFIX.png
+          --max-error E   exit with code 4 if any term's 99th-percentile error at k <= 0.3 h/Mpc exceeds E
+                          (a fraction: 0.001 is 0.1 %)
+          --threads N     [number of cores] threads for the direct calculation
+          --help          this text
+        """;
 }

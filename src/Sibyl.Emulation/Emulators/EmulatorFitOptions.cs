@@ -8,8 +8,12 @@ public sealed record EmulatorFitOptions
     /// <summary>Covariance function of every process.</summary>
     public KernelKind Kernel { get; init; } = KernelKind.Matern52;
 
-    /// <summary>Which components share a process.</summary>
-    public ComponentSharing Sharing { get; init; } = ComponentSharing.PerTerm;
+    /// <summary>
+    /// Leading principal components of each block that get a Gaussian process of their own; the remaining ones share
+    /// one process (one kernel, one Cholesky factor). The leading components carry nearly all the variance and
+    /// deserve their own length scales; sharing the rest keeps prediction to a few kernel vectors per term.
+    /// </summary>
+    public int SeparateComponents { get; init; } = 4;
 
     /// <summary>Degree of the polynomial trend (0, 1 or 2).</summary>
     public int TrendDegree { get; init; } = 2;
@@ -36,8 +40,11 @@ public sealed record EmulatorFitOptions
     /// <summary>Optimiser iterations per start.</summary>
     public int MaxIterations { get; init; } = 200;
 
-    /// <summary>Keep the Cholesky factors so that predictive variances are available (n² numbers per process).</summary>
-    public bool KeepVariance { get; init; } = true;
+    /// <summary>
+    /// Keep the Cholesky factors so that predictive variances are available. Off by default: they cost n² numbers per
+    /// process (32 MB each at 2000 training points) while the mean needs only n per output.
+    /// </summary>
+    public bool KeepVariance { get; init; }
 
     /// <summary>Seed of the optimiser restarts.</summary>
     public ulong Seed { get; init; } = 1;

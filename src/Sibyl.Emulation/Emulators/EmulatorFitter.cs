@@ -48,7 +48,7 @@ public static class EmulatorFitter
         }
 
         progress?.Invoke($"fit: {blocks.Sum(b => b.SingularValues.Length)} principal components over {blocks.Length} blocks (largest reconstruction error {blocks.Max(b => b.MaximumError):G2})");
-        var groups = Groups(blocks, terms, options.Sharing);
+        var groups = Groups(blocks, options.SeparateComponents);
         var processes = new ProcessContract[groups.Count];
         int finished = 0;
         var clock = Stopwatch.StartNew();
@@ -172,19 +172,16 @@ public static class EmulatorFitter
         return (block, pca.Project(data));
     }
 
-    private static List<(int Block, int Component)[]> Groups(BlockContract[] blocks, int terms, ComponentSharing sharing)
+    private static List<(int Block, int Component)[]> Groups(BlockContract[] blocks, int separate)
     {
         var groups = new List<(int, int)[]>();
         for (int b = 0; b < blocks.Length; b++)
         {
-            var outputs = Enumerable.Range(0, blocks[b].SingularValues.Length).Select(c => (b, c)).ToArray();
-            if (sharing == ComponentSharing.PerTerm)
+            int count = blocks[b].SingularValues.Length;
+            groups.AddRange(Enumerable.Range(0, Math.Min(separate, count)).Select(c => new[] { (b, c) }));
+            if (count > separate)
             {
-                groups.Add(outputs);
-            }
-            else
-            {
-                groups.AddRange(outputs.Select(o => new[] { o }));
+                groups.Add([.. Enumerable.Range(separate, count - separate).Select(c => (b, c))]);
             }
         }
 

@@ -1,0 +1,110 @@
+using System.Globalization;
+using Sibyl.Cli.Arguments;
+using Sibyl.Cli.Output;
+using Sibyl.Emulation.Emulators;
+using Sibyl.Emulation.Validation;
+using Sibyl.Training.Design;
+using Sibyl.Training.Runs;
+
+namespace Sibyl.Cli.Commands;
+
+/// <summary>
+/// <c>sibyl check EMULATOR</c>: draws fresh points in the emulator's box (a new Latin hypercube, neither training nor
+/// held-out points), runs the direct calculation there and reports how far the emulator is from it.
+/// </summary>
+internal static class CheckCommand
+{
+    public static int Run(string[] args, TextWriter stdout, TextWriter stderr)
+    {
+        if (args.Contains("--help") || args.Length == 0)
+        {
+            stdout.Write(HelpText.Check);
+            return args.Length == 0 ? Entry.UsageError : 0;
+        }
+
+        var arguments = new CommandArguments(args[1..], new HashSet<string>(StringComparer.Ordinal));
+        string emulatorPath = args[0];
+        int points = arguments.IntegerOption("points", 50, 2, 1_000_000);
+        int threads = arguments.IntegerOption("threads", Environment.ProcessorCount, 1, 4096);
+        string? seedText = arguments.Option("seed");
+        string report = arguments.Option("report") ?? Path.ChangeExtension(emulatorPath, null) + "-check";
+        double? limit = arguments.Option("max-error") is null ? null : arguments.NumberOption("max-error", 0, 0, 1);
+        arguments.RejectUnused("see sibyl check --help");
+        if (!File.Exists(emulatorPath))
+        {
+            throw new UsageException($"check: emulator '{emulatorPath}' not found (make one with sibyl fit)");
+        }
+
+        OutputPath.RequireFolder(report, "--report");
+        var emulator = SpectrumEmulator.Load(emulatorPath);
+        ulong seed = seedText is null ? SeededRandom.Derive(emulator.Spec.Seed, 0xC4ECC) : ParseSeed(seedText);
+        var spec = emulator.Spec with { TrainingPoints = points, HeldOutPoints = 0, Seed = seed };
+        var design = TrainingDesign.Create(spec);
+        var calculator = new PointCalculator(design);
+        var comparisons = new Comparison?[points * emulator.SliceCount];
+        var failures = new string?[points];
+        int done = 0;
+        stderr.WriteLine($"check: {points} fresh points in the box of {emulatorPath} (seed {seed}), direct calculation on {threads} threads");
+        using var local = new ThreadLocal<EmulatorPredictor>(emulator.CreatePredictor);
+        Parallel.For(0, points, new ParallelOptions { MaxDegreeOfParallelism = threads }, i =>
+        {
+            try
+            {
+                Compare(emulator, local.Value!, calculator, design, i, comparisons);
+            }
+            catch (Exception e) when (e is ArgumentException or ArithmeticException or InvalidOperationException or Training.Linear.ExternalLinearException)
+            {
+                failures[i] = e.Message;
+            }
+
+            int d = Interlocked.Increment(ref done);
+            if (d % Math.Max(1, points / 10) == 0 || d == points)
+            {
+                stderr.WriteLine($"check: {d}/{points} points");
+            }
+        });
+
+        for (int i = 0; i < points; i++)
+        {
+            if (failures[i] is { } failure)
+            {
+                stderr.WriteLine($"check: warning: direct calculation failed at point {i}: {failure}");
+            }
+        }
+
+        var measured = AccuracyReport.Measure(
+            "fresh direct-run", [.. emulator.Layout.Terms.Select(t => t.Name)], [.. emulator.K], [.. comparisons.OfType<Comparison>()]);
+        AccuracyOutput.Summarize(measured, "check", stderr);
+        AccuracyOutput.Write(measured, $"emulator {emulatorPath} against fresh direct runs", report, stderr);
+        stderr.WriteLine($"check: training set computed by build {emulator.CodeFingerprint}, direct runs now by build {Training.Storage.CodeFingerprint.Current}");
+        if (limit is { } bound)
+        {
+            for (int t = 0; t < measured.TermNames.Count; t++)
+            {
+                if (measured.Worst99(t) > bound)
+                {
+                    stderr.WriteLine(string.Create(CultureInfo.InvariantCulture, $"check: {measured.TermNames[t]} exceeds --max-error {bound:G}"));
+                    return Entry.CheckFailed;
+                }
+            }
+        }
+
+        return 0;
+    }
+
+    private static void Compare(SpectrumEmulator emulator, EmulatorPredictor predictor, PointCalculator calculator, TrainingDesign design, int i, Comparison?[] comparisons)
+    {
+        var direct = calculator.Compute(i, CancellationToken.None);
+        var parameters = design.Point(i);
+        int size = emulator.Layout.Terms.Count * emulator.K.Count;
+        for (int s = 0; s < emulator.SliceCount; s++)
+        {
+            var emulated = new double[size];
+            predictor.Predict(parameters, s, emulated, [], []);
+            comparisons[(i * emulator.SliceCount) + s] = new Comparison(EmulatorFitter.Label(emulator, i, parameters, s), emulated, direct.AsSpan(s * size, size).ToArray());
+        }
+    }
+
+    private static ulong ParseSeed(string text) =>
+        ulong.TryParse(text, NumberStyles.None, CultureInfo.InvariantCulture, out ulong seed) ? seed : throw new UsageException($"--seed: must be a non-negative integer, got '{text}'");
+}
