@@ -1,7 +1,4 @@
-using System.Globalization;
 using System.Text.Json;
-using Sibyl.Cosmology;
-using Sibyl.Cosmology.Linear;
 using Sibyl.Training.Design;
 using Sibyl.Training.Linear;
 using Sibyl.Training.Runs;
@@ -17,8 +14,7 @@ public class ExternalLinearProviderTests
         using var folder = new TemporaryFolder();
         var direct = ProviderSpec.Direct();
         string table = folder.File("linear.txt");
-        var model = CosmologyModel.Create(GridPoint.Cosmology(direct, [0.5]));
-        File.WriteAllLines(table, LogGridFunction.LogGrid(1e-4, 50, 400).Select(k => string.Create(CultureInfo.InvariantCulture, $"{k:R} {model.LinearPower(k, 0):R}")));
+        ProviderSpec.WriteTable(table);
         var external = ProviderSpec.With(["sh", "-c", $"cat > /dev/null; cat '{table}'"], 30);
 
         var fromProgram = Merge(external, folder.Folder("program.run"), out var summary);

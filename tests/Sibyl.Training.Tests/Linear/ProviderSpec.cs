@@ -1,4 +1,7 @@
+using System.Globalization;
 using System.Text.Json;
+using Sibyl.Cosmology;
+using Sibyl.Cosmology.Linear;
 using Sibyl.Training.Specs;
 
 namespace Sibyl.Training.Tests.Linear;
@@ -13,6 +16,16 @@ internal static class ProviderSpec
 
     public static GridSpec With(IEnumerable<string> command, double timeoutSeconds) =>
         SpecText.Spec([.. Edits(), $"linear={{\"command\": {JsonSerializer.Serialize(command)}, \"timeout_seconds\": {timeoutSeconds:R}, \"k_min\": 1e-4, \"k_max\": 50}}"]);
+
+    /// <summary>
+    /// Writes the Eisenstein &amp; Hu fit's P_L(k, z = 0) of the spec's cosmology, 400 rows log-spaced over
+    /// [1e-4, 50] h/Mpc, as a linear program would print it.
+    /// </summary>
+    public static void WriteTable(string path)
+    {
+        var model = CosmologyModel.Create(GridPoint.Cosmology(Direct(), [0.5]));
+        File.WriteAllLines(path, LogGridFunction.LogGrid(1e-4, 50, 400).Select(k => string.Create(CultureInfo.InvariantCulture, $"{k:R} {model.LinearPower(k, 0):R}")));
+    }
 
     private static string[] Edits() =>
     [

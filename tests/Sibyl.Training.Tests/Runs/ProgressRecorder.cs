@@ -2,8 +2,11 @@ using Sibyl.Training.Runs;
 
 namespace Sibyl.Training.Tests.Runs;
 
-/// <summary>Records progress synchronously (<see cref="Progress{T}"/> would post reports to the thread pool).</summary>
-internal sealed class ProgressRecorder(List<RunProgress> reports) : IProgress<RunProgress>
+/// <summary>
+/// Records progress synchronously (<see cref="Progress{T}"/> would post reports to the thread pool), then hands
+/// each report to <paramref name="then"/>.
+/// </summary>
+internal sealed class ProgressRecorder(List<RunProgress> reports, Action<RunProgress>? then = null) : IProgress<RunProgress>
 {
     public void Report(RunProgress value)
     {
@@ -11,5 +14,7 @@ internal sealed class ProgressRecorder(List<RunProgress> reports) : IProgress<Ru
         {
             reports.Add(value);
         }
+
+        then?.Invoke(value);
     }
 }

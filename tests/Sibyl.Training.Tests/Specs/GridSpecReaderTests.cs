@@ -52,6 +52,8 @@ public class GridSpecReaderTests
     [InlineData("linear={\"command\": [\"x\"], \"k_min\": 0.1, \"k_max\": 1}", "linear.k_min, linear.k_max: need")]
     [InlineData("name=\"../grid\"", "name: \"../grid\" must be 1-64 letters")]
     [InlineData("name=", "name: missing")]
+    [InlineData("name=\"\"", "name: \"\" must be 1-64 letters")]
+    [InlineData("output=\"\"", "output: must be \"matter\" or \"galaxy\", got \"\"")]
     [InlineData("chunk_size=0", "chunk_size: must be an integer in [1, 100000]")]
     public void Each_invalid_spec_is_refused_with_a_problem_naming_its_field(string edits, string problem)
     {
@@ -68,6 +70,23 @@ public class GridSpecReaderTests
         var e = Assert.Throws<GridSpecException>(() => GridSpecReader.Parse("{ \"name\": \"x\", ", "grid.json"));
 
         Assert.StartsWith("not valid JSON", Assert.Single(e.Problems), StringComparison.Ordinal);
+    }
+
+    [Theory]
+    [InlineData("\"vary\": { \"omega_cdm\": [0.11, 0.13], \"h\": [0.65, 0.70] }", "\"vary\": { \"h\": [0.6, 0.8], \"omega_cdm\": [0.11, 0.13], \"h\": [0.65, 0.70] }", "'h'")]
+    [InlineData("\"fixed\": { \"omega_b\": 0.0224 }", "\"fixed\": { \"omega_b\": 0.0224, \"omega_b\": 0.0230 }", "'omega_b'")]
+    [InlineData("\"seed\": 7,", "\"seed\": 7, \"seed\": 8,", "'seed'")]
+    public void A_field_given_twice_is_refused(string field, string twice, string name)
+    {
+        // JSON leaves duplicate names to the reader; taking either value silently would draw a design the user
+        // did not ask for (a varied parameter given twice would even become two design columns).
+        Assert.Contains(field, SpecText.Base, StringComparison.Ordinal);
+
+        var e = Assert.Throws<GridSpecException>(() => GridSpecReader.Parse(SpecText.Base.Replace(field, twice, StringComparison.Ordinal), "grid.json"));
+
+        var problem = Assert.Single(e.Problems);
+        Assert.StartsWith("not valid JSON", problem, StringComparison.Ordinal);
+        Assert.Contains(name, problem, StringComparison.Ordinal);
     }
 
     [Fact]
