@@ -23,8 +23,10 @@ internal static class ProviderSpec
     /// </summary>
     public static void WriteTable(string path)
     {
+        // P_L(k, 0) = D(0)² Shape(k), as CosmologyModel.LinearPower computes it, with the growth solved once, not per row.
         var model = CosmologyModel.Create(GridPoint.Cosmology(Direct(), [0.5]));
-        File.WriteAllLines(path, LogGridFunction.LogGrid(1e-4, 50, 400).Select(k => string.Create(CultureInfo.InvariantCulture, $"{k:R} {model.LinearPower(k, 0):R}")));
+        double growth = model.Growth(0).D;
+        File.WriteAllLines(path, LogGridFunction.LogGrid(1e-4, 50, 400).Select(k => string.Create(CultureInfo.InvariantCulture, $"{k:R} {growth * growth * model.Linear.Shape.Evaluate(k):R}")));
     }
 
     private static string[] Edits() =>
