@@ -34,7 +34,8 @@ public static class GridSpecReader
         JsonDocument document;
         try
         {
-            document = JsonDocument.Parse(json, new JsonDocumentOptions { CommentHandling = JsonCommentHandling.Skip, AllowTrailingCommas = true });
+            // A name given twice is refused: silently taking one of the values would draw a design the user did not ask for.
+            document = JsonDocument.Parse(json, new JsonDocumentOptions { CommentHandling = JsonCommentHandling.Skip, AllowTrailingCommas = true, AllowDuplicateProperties = false });
         }
         catch (JsonException e)
         {
@@ -76,14 +77,14 @@ public static class GridSpecReader
         }
 
         string name = String(root, "name", problems) ?? "";
-        string outputText = String(root, "output", problems) ?? "";
+        string? outputText = String(root, "output", problems);
         var output = outputText switch
         {
             "matter" => OutputKind.Matter,
             "galaxy" => OutputKind.Galaxy,
             _ => (OutputKind?)null,
         };
-        if (output is null && outputText.Length > 0)
+        if (output is null && outputText is not null)
         {
             problems.Add($"output: must be \"matter\" or \"galaxy\", got \"{outputText}\"");
         }

@@ -13,7 +13,8 @@ internal static partial class GridSpecValidator
 {
     public static void Check(GridSpec spec, List<string> problems)
     {
-        if (spec.Name.Length > 0 && !SafeName().IsMatch(spec.Name))
+        // An empty name is checked too; a missing or non-string one the reader has reported already.
+        if (!SafeName().IsMatch(spec.Name) && !problems.Any(p => p.StartsWith("name: ", StringComparison.Ordinal)))
         {
             problems.Add($"name: \"{spec.Name}\" must be 1-64 letters, digits, '.', '_' or '-' (it names files)");
         }
