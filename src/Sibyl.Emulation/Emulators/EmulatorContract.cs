@@ -77,6 +77,10 @@ public sealed class EmulatorContract
     /// <summary>Accuracy measured on the held-out points when it was fitted.</summary>
     [Key(17)]
     public AccuracyContract Accuracy { get; set; } = new();
+
+    /// <summary><see cref="InputWarp"/> of each parameter, as integers.</summary>
+    [Key(18)]
+    public int[] InputWarps { get; set; } = [];
 }
 
 /// <summary>One basis term at one slice: its transform and principal components.</summary>

@@ -35,7 +35,8 @@ public static class EmulatorFitter
             throw new ArgumentException("the training set has no usable held-out points, so the emulator's accuracy could not be measured; give points.heldout > 0 in the spec");
         }
 
-        var inputs = Matrix<double>.Build.Dense(training.Length, d, (i, q) => set.Unit(training[i])[q]);
+        var warps = set.Spec.Varied.Select(v => SpectrumEmulator.WarpFor(v.Name, v.Min)).ToArray();
+        var inputs = Matrix<double>.Build.Dense(training.Length, d, (i, q) => SpectrumEmulator.Warp(warps[q], set.Unit(training[i])[q]).Value);
         var blocks = new BlockContract[slices * terms];
         var coefficients = new Matrix<double>[slices * terms];
         for (int s = 0; s < slices; s++)
@@ -79,6 +80,7 @@ public static class EmulatorFitter
             Blocks = blocks,
             Processes = processes,
             Accuracy = Placeholder(terms, nk),
+            InputWarps = [.. warps.Select(w => (int)w)],
         };
         var emulator = new SpectrumEmulator(contract, "new emulator");
         contract.Accuracy = Validate(emulator, set, heldOut).Contract;

@@ -16,7 +16,7 @@ public sealed class EmulatorPredictor
     private readonly GaussianProcessPredictor[] _processes;
     private readonly double[][] _mean, _variance, _gradient;
     private readonly double[][] _coefficients, _coefficientVariance, _coefficientGradient;
-    private readonly double[] _unit, _features, _values, _inverseWidth;
+    private readonly double[] _unit, _features, _values, _inverseWidth, _warpSlope;
     private readonly int[][] _processesOfSlice;
     private readonly BasisSpectra _spectra;
     private readonly int _d, _nk, _terms;
@@ -35,6 +35,7 @@ public sealed class EmulatorPredictor
         _coefficientVariance = [.. emulator.Blocks.Select(b => new double[b.Count])];
         _coefficientGradient = [.. emulator.Blocks.Select(b => new double[b.Count * _d])];
         _unit = new double[_d];
+        _warpSlope = new double[_d];
         _features = new double[_nk];
         _values = new double[_terms * _nk];
         _inverseWidth = [.. Enumerable.Range(0, _d).Select(q => 1.0 / (emulator.Max[q] - emulator.Min[q]))];
@@ -98,7 +99,7 @@ public sealed class EmulatorPredictor
         bool wantVariance = !variance.IsEmpty, wantGradient = !gradient.IsEmpty;
         for (int q = 0; q < _d; q++)
         {
-            _unit[q] = (parameters[q] - _emulator.Min[q]) * _inverseWidth[q];
+            (_unit[q], _warpSlope[q]) = SpectrumEmulator.Warp(_emulator.Warps[q], (parameters[q] - _emulator.Min[q]) * _inverseWidth[q]);
         }
 
         var contract = _emulator.Contract;
@@ -172,7 +173,7 @@ public sealed class EmulatorPredictor
         }
     }
 
-    /// <summary>∂x_k/∂θ_q = s_k Σ_c v_ck ∂a_c/∂u_q / (max_q − min_q); for a log target ∂P/∂θ = P ∂ln P/∂θ.</summary>
+    /// <summary>∂x_k/∂θ_q = s_k Σ_c v_ck ∂a_c/∂w_q · w_q'(u) / (max_q − min_q) with w the input warp; for a log target ∂P/∂θ = P ∂ln P/∂θ.</summary>
     private void Differentiate(Compression.PrincipalComponents pca, double[] coefficientGradient, ReadOnlySpan<double> block, bool log, Span<double> gradient)
     {
         var basis = pca.Basis;
@@ -188,7 +189,7 @@ public sealed class EmulatorPredictor
                     sum += basis[(c * _nk) + i] * coefficientGradient[(c * _d) + q];
                 }
 
-                gradient[(i * _d) + q] = factor * sum * _inverseWidth[q];
+                gradient[(i * _d) + q] = factor * sum * _warpSlope[q] * _inverseWidth[q];
             }
         }
     }

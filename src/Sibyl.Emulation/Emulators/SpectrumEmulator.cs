@@ -37,7 +37,7 @@ public sealed class SpectrumEmulator
 
         int d = contract.ParameterNames.Length, nk = contract.K.Length, terms = contract.TermNames.Length;
         SliceCount = Math.Max(1, contract.Redshifts.Length);
-        if (d == 0 || contract.Min.Length != d || contract.Max.Length != d || nk == 0 || terms == 0
+        if (d == 0 || contract.Min.Length != d || contract.Max.Length != d || contract.InputWarps.Length != d || nk == 0 || terms == 0
             || contract.Blocks.Length != SliceCount * terms || contract.TrainingInputs.Length % d != 0)
         {
             throw new CorruptFileException(source, "inconsistent: its sizes do not agree");
@@ -92,6 +92,7 @@ public sealed class SpectrumEmulator
         }
 
         Accuracy = new AccuracyReport(contract.Accuracy, [.. contract.TermNames], contract.K);
+        Warps = [.. contract.InputWarps.Select(w => Enum.IsDefined((InputWarp)w) ? (InputWarp)w : throw new CorruptFileException(source, "unknown input warp"))];
     }
 
     /// <summary>The grid spec of the training set.</summary>
@@ -134,11 +135,31 @@ public sealed class SpectrumEmulator
 
     internal TargetTransform[] Transforms { get; }
 
+    internal InputWarp[] Warps { get; }
+
     internal GaussianProcessModel[] Processes { get; }
 
     internal QuadraticTrend[] Trends { get; }
 
     internal EmulatorContract Contract => _contract;
+
+    /// <summary>The warp the fitter chooses for a parameter: √u for Ω_rc on a box from 0 (see <see cref="InputWarp.SquareRoot"/>).</summary>
+    public static InputWarp WarpFor(string name, double min) =>
+        name == ParameterCatalog.OmegaRc.Name && min == 0.0 ? InputWarp.SquareRoot : InputWarp.Identity;
+
+    /// <summary>The process input of unit-box coordinate <paramref name="u"/> under <paramref name="warp"/>, and its derivative.</summary>
+    public static (double Value, double Derivative) Warp(InputWarp warp, double u)
+    {
+        if (warp == InputWarp.Identity)
+        {
+            return (u, 1.0);
+        }
+
+        // Below 0 (mild extrapolation) the square root is continued as the odd function; the derivative is capped at
+        // u = 1e-12 (where it is 5e5 per unit of u) rather than infinite at the edge.
+        double root = Math.Sqrt(Math.Max(Math.Abs(u), 1e-12));
+        return (Math.CopySign(Math.Sqrt(Math.Abs(u)), u), 0.5 / root);
+    }
 
     /// <summary>A predictor with its own buffers; make one per thread.</summary>
     public EmulatorPredictor CreatePredictor() => new(this);
