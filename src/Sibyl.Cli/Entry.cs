@@ -42,6 +42,7 @@ internal static class Entry
                 ["merge", .. var rest] => MergeCommand.Run(rest, stdout, stderr),
                 ["fit", .. var rest] => FitCommand.Run(rest, stdout, stderr),
                 ["check", .. var rest] => CheckCommand.Run(rest, stdout, stderr),
+                ["quickstart", .. var rest] => QuickstartCommand.Run(rest, stdout, stderr, interactive),
                 _ => throw new UsageException($"unknown command '{args[0]}'; try sibyl --help"),
             };
         }

@@ -3,8 +3,6 @@ using Sibyl.Cli.Arguments;
 using Sibyl.Cli.Output;
 using Sibyl.Emulation.Emulators;
 using Sibyl.Emulation.Validation;
-using Sibyl.Training.Design;
-using Sibyl.Training.Runs;
 
 namespace Sibyl.Cli.Commands;
 
@@ -36,44 +34,25 @@ internal static class CheckCommand
         }
 
         OutputPath.RequireFolder(report, "--report");
+
+        // Progress arrives from worker threads.
+        stderr = TextWriter.Synchronized(stderr);
         var emulator = SpectrumEmulator.Load(emulatorPath);
-        ulong seed = seedText is null ? SeededRandom.Derive(emulator.Spec.Seed, 0xC4ECC) : ParseSeed(seedText);
-        var spec = emulator.Spec with { TrainingPoints = points, HeldOutPoints = 0, Seed = seed };
-        var design = TrainingDesign.Create(spec);
-        var calculator = new PointCalculator(design);
-        var comparisons = new Comparison?[points * emulator.SliceCount];
-        var failures = new string?[points];
-        int done = 0;
+        ulong seed = seedText is null ? FreshPointCheck.DefaultSeed(emulator) : ParseSeed(seedText);
         stderr.WriteLine($"check: {points} fresh points in the box of {emulatorPath} (seed {seed}), direct calculation on {threads} threads");
-        using var local = new ThreadLocal<EmulatorPredictor>(emulator.CreatePredictor);
-        Parallel.For(0, points, new ParallelOptions { MaxDegreeOfParallelism = threads }, i =>
-        {
-            try
+        var measured = FreshPointCheck.Run(
+            emulator,
+            points,
+            seed,
+            threads,
+            done =>
             {
-                Compare(emulator, local.Value!, calculator, design, i, comparisons);
-            }
-            catch (Exception e) when (e is ArgumentException or ArithmeticException or InvalidOperationException or Training.Linear.ExternalLinearException)
-            {
-                failures[i] = e.Message;
-            }
-
-            int d = Interlocked.Increment(ref done);
-            if (d % Math.Max(1, points / 10) == 0 || d == points)
-            {
-                stderr.WriteLine($"check: {d}/{points} points");
-            }
-        });
-
-        for (int i = 0; i < points; i++)
-        {
-            if (failures[i] is { } failure)
-            {
-                stderr.WriteLine($"check: warning: direct calculation failed at point {i}: {failure}");
-            }
-        }
-
-        var measured = AccuracyReport.Measure(
-            "fresh direct-run", [.. emulator.Layout.Terms.Select(t => t.Name)], [.. emulator.K], [.. comparisons.OfType<Comparison>()]);
+                if (done % Math.Max(1, points / 10) == 0 || done == points)
+                {
+                    stderr.WriteLine($"check: {done}/{points} points");
+                }
+            },
+            failure => stderr.WriteLine($"check: warning: the direct calculation failed at {failure}"));
         AccuracyOutput.Summarize(measured, "check", stderr);
         AccuracyOutput.Write(measured, $"emulator {emulatorPath} against fresh direct runs", report, stderr);
         stderr.WriteLine($"check: training set computed by build {emulator.CodeFingerprint}, direct runs now by build {Training.Storage.CodeFingerprint.Current}");
@@ -90,19 +69,6 @@ internal static class CheckCommand
         }
 
         return 0;
-    }
-
-    private static void Compare(SpectrumEmulator emulator, EmulatorPredictor predictor, PointCalculator calculator, TrainingDesign design, int i, Comparison?[] comparisons)
-    {
-        var direct = calculator.Compute(i, CancellationToken.None);
-        var parameters = design.Point(i);
-        int size = emulator.Layout.Terms.Count * emulator.K.Count;
-        for (int s = 0; s < emulator.SliceCount; s++)
-        {
-            var emulated = new double[size];
-            predictor.Predict(parameters, s, emulated, [], []);
-            comparisons[(i * emulator.SliceCount) + s] = new Comparison(EmulatorFitter.Label(emulator, i, parameters, s), emulated, direct.AsSpan(s * size, size).ToArray());
-        }
     }
 
     private static ulong ParseSeed(string text) =>

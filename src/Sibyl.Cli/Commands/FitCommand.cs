@@ -45,6 +45,9 @@ internal static class FitCommand
 
         OutputPath.RequireFolder(output, "--out");
         OutputPath.RequireFolder(report, "--report");
+
+        // Progress arrives from worker threads.
+        stderr = TextWriter.Synchronized(stderr);
         var set = TrainingSet.Load(trainingPath);
         int failed = Enumerable.Range(0, set.Count).Count(i => set.Error(i) is not null);
         if (failed > 0)

@@ -122,6 +122,9 @@ public sealed class SpectrumEmulator
     /// <summary>Accuracy measured on the held-out points at fit time.</summary>
     public AccuracyReport Accuracy { get; }
 
+    /// <summary>Hash of the design of the training set.</summary>
+    public string DesignHash => _contract.DesignHash;
+
     /// <summary>Fingerprint of the build that computed the training set.</summary>
     public string CodeFingerprint => _contract.CodeFingerprint;
 

@@ -1,0 +1,68 @@
+using Sibyl.Emulation.Emulators;
+using Sibyl.Training.Design;
+using Sibyl.Training.Runs;
+
+namespace Sibyl.Emulation.Validation;
+
+/// <summary>
+/// Compares an emulator with the direct calculation at fresh points of its box: a new Latin hypercube from its own
+/// seed, so neither training nor held-out points, computed with the same calculation that made the training set.
+/// </summary>
+public static class FreshPointCheck
+{
+    /// <summary>The default seed of the fresh points: derived from the grid's, on a stream no design uses.</summary>
+    public static ulong DefaultSeed(SpectrumEmulator emulator)
+    {
+        ArgumentNullException.ThrowIfNull(emulator);
+        return SeededRandom.Derive(emulator.Spec.Seed, 0xC4ECC);
+    }
+
+    /// <summary>Runs the comparison on <paramref name="threads"/> threads.</summary>
+    /// <param name="emulator">The emulator.</param>
+    /// <param name="points">Fresh points, at least 2.</param>
+    /// <param name="seed">Seed of their Latin hypercube.</param>
+    /// <param name="threads">Threads for the direct calculation.</param>
+    /// <param name="progress">Receives (points done, failures so far) after each point.</param>
+    /// <param name="failures">Receives each failed point's message.</param>
+    /// <exception cref="ArgumentException">Every point failed, or there are fewer than 2.</exception>
+    public static AccuracyReport Run(SpectrumEmulator emulator, int points, ulong seed, int threads, Action<int>? progress, Action<string>? failures)
+    {
+        ArgumentNullException.ThrowIfNull(emulator);
+        ArgumentOutOfRangeException.ThrowIfLessThan(points, 2);
+        var spec = emulator.Spec with { TrainingPoints = points, HeldOutPoints = 0, Seed = seed };
+        var design = TrainingDesign.Create(spec);
+        var calculator = new PointCalculator(design);
+        int size = emulator.Layout.Terms.Count * emulator.K.Count;
+        var comparisons = new Comparison?[points * emulator.SliceCount];
+        int done = 0;
+        using var predictors = new ThreadLocal<EmulatorPredictor>(emulator.CreatePredictor);
+        Parallel.For(0, points, new ParallelOptions { MaxDegreeOfParallelism = threads }, i =>
+        {
+            try
+            {
+                var direct = calculator.Compute(i, CancellationToken.None);
+                var parameters = design.Point(i);
+                for (int s = 0; s < emulator.SliceCount; s++)
+                {
+                    var emulated = new double[size];
+                    predictors.Value!.Predict(parameters, s, emulated, [], []);
+                    comparisons[(i * emulator.SliceCount) + s] = new Comparison(EmulatorFitter.Label(emulator, i, parameters, s), emulated, direct.AsSpan(s * size, size).ToArray());
+                }
+            }
+            catch (Exception e) when (e is ArgumentException or ArithmeticException or InvalidOperationException or Training.Linear.ExternalLinearException)
+            {
+                failures?.Invoke($"point {i}: {e.Message}");
+            }
+
+            progress?.Invoke(Interlocked.Increment(ref done));
+        });
+
+        var compared = comparisons.OfType<Comparison>().ToList();
+        if (compared.Count == 0)
+        {
+            throw new ArgumentException("the direct calculation failed at every fresh point; nothing to compare");
+        }
+
+        return AccuracyReport.Measure("fresh direct-run", [.. emulator.Layout.Terms.Select(t => t.Name)], [.. emulator.K], compared);
+    }
+}
