@@ -74,6 +74,7 @@ public static class GaussianProcessRegression
         {
             double[] initial = start == 0 ? InitialPoint(options, d) : RandomPoint(ref random, d);
             Clamp(initial, lower, upper, initial);
+            RaiseNoiseUntilDefined(likelihood, initial, upper[^1]);
             (double[] x, _, _) = optimiser.Minimize(Objective, initial, options.MaximumIterations);
             Clamp(x, lower, upper, x);
             double value = likelihood.Evaluate(x, []);
@@ -194,6 +195,18 @@ public static class GaussianProcessRegression
             throw new ArgumentException(
                 string.Create(CultureInfo.InvariantCulture, $"Minimum{name} = {minimum:R} and Maximum{name} = {maximum:R} must satisfy 0 < minimum ≤ maximum < ∞."),
                 "options");
+        }
+    }
+
+    /// <summary>
+    /// A start where K is not numerically positive definite (near-duplicate points, a smooth kernel, a tiny nugget)
+    /// gives the optimiser nothing to descend from, so the nugget is raised a hundredfold at a time until it is.
+    /// </summary>
+    private static void RaiseNoiseUntilDefined(MarginalLikelihood likelihood, double[] theta, double upperLogNoise)
+    {
+        while (double.IsNegativeInfinity(likelihood.Evaluate(theta, [])) && theta[^1] < upperLogNoise)
+        {
+            theta[^1] = Math.Min(upperLogNoise, theta[^1] + Math.Log(100.0));
         }
     }
 
