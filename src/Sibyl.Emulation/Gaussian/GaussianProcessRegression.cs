@@ -26,7 +26,8 @@ public static class GaussianProcessRegression
     /// <remarks>
     /// Bounds are enforced in log space: the likelihood is evaluated at the point clamped into the box and a quadratic
     /// penalty (weight n·m per unit of log parameter squared) pulls the iterate back, so the objective stays continuous;
-    /// the answer is the clamped point.
+    /// the answer is the clamped point. A start at which K does not factor numerically has its nugget raised a
+    /// hundredfold at a time until it does. Cost: one O(n³) factorisation and inverse per likelihood evaluation.
     /// </remarks>
     /// <param name="inputs">n × d training inputs in the unit box, one point per row; n ≥ 2, all finite.</param>
     /// <param name="outputs">n × m training outputs, one column per output, all finite.</param>
