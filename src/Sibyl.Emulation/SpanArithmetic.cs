@@ -15,21 +15,23 @@ internal static class SpanArithmetic
         int width = Vector<double>.Count;
         var va = MemoryMarshal.Cast<double, Vector<double>>(a);
         var vb = MemoryMarshal.Cast<double, Vector<double>>(b);
-        // Two accumulators hide the latency of the fused multiply-add.
-        Vector<double> even = Vector<double>.Zero, odd = Vector<double>.Zero;
+        // Four accumulators hide the latency of the fused multiply-add.
+        Vector<double> s0 = Vector<double>.Zero, s1 = s0, s2 = s0, s3 = s0;
         int v = 0;
-        for (; v + 1 < va.Length; v += 2)
+        for (; v + 3 < va.Length; v += 4)
         {
-            even = Vector.FusedMultiplyAdd(va[v], vb[v], even);
-            odd = Vector.FusedMultiplyAdd(va[v + 1], vb[v + 1], odd);
+            s0 = Vector.FusedMultiplyAdd(va[v], vb[v], s0);
+            s1 = Vector.FusedMultiplyAdd(va[v + 1], vb[v + 1], s1);
+            s2 = Vector.FusedMultiplyAdd(va[v + 2], vb[v + 2], s2);
+            s3 = Vector.FusedMultiplyAdd(va[v + 3], vb[v + 3], s3);
         }
 
-        if (v < va.Length)
+        for (; v < va.Length; v++)
         {
-            even = Vector.FusedMultiplyAdd(va[v], vb[v], even);
+            s0 = Vector.FusedMultiplyAdd(va[v], vb[v], s0);
         }
 
-        double sum = Vector.Sum(even + odd);
+        double sum = Vector.Sum((s0 + s1) + (s2 + s3));
         for (int i = va.Length * width; i < a.Length; i++)
         {
             sum += a[i] * b[i];

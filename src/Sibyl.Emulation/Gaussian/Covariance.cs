@@ -7,7 +7,7 @@ namespace Sibyl.Emulation.Gaussian;
 /// </summary>
 internal static class Covariance
 {
-    public static readonly double Sqrt5 = Math.Sqrt(5.0);
+    public const double Sqrt5 = 2.2360679774997896964;
 
     public static double Profile(KernelKind kernel, double r2)
     {

@@ -1,5 +1,4 @@
 using System.Globalization;
-using System.Runtime.Intrinsics;
 
 namespace Sibyl.Emulation.Gaussian;
 
@@ -43,7 +42,7 @@ public sealed class GaussianProcessModel
         // Derived layout for the predictor: inputs divided by their length scales, stored dimension by dimension and
         // padded to whole SIMD vectors; α is padded with zeros so that padding points contribute nothing.
         int n = TrainingCount, d = InputCount, m = OutputCount;
-        PaddedCount = (n + Vector256<double>.Count - 1) / Vector256<double>.Count * Vector256<double>.Count;
+        PaddedCount = (n + PointBlock - 1) / PointBlock * PointBlock;
         InverseLengthScales = new double[d];
         for (int q = 0; q < d; q++)
         {
@@ -101,6 +100,9 @@ public sealed class GaussianProcessModel
 
     /// <summary>Σ_j log p(ỹ_j | X, θ) of the standardized outputs at these hyperparameters (R&amp;W eq. 2.30), dimensionless.</summary>
     public double LogMarginalLikelihood { get; }
+
+    /// <summary>Training points handled together by the predictor: four 256-bit vectors.</summary>
+    internal const int PointBlock = 16;
 
     internal int PaddedCount { get; }
 

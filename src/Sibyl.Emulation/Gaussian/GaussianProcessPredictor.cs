@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using System.Runtime.InteropServices;
 using System.Runtime.Intrinsics;
 
@@ -78,7 +79,7 @@ public sealed class GaussianProcessPredictor
             scaled[q] = input[q] * _model.InverseLengthScales[q];
         }
 
-        KernelVector(scaled);
+        KernelVector(scaled, withSlope: !gradient.IsEmpty);
         int padded = _model.PaddedCount;
         ReadOnlySpan<double> outputMean = _model.OutputMean, outputScale = _model.OutputScale;
         for (int j = 0; j < m; j++)
@@ -101,48 +102,80 @@ public sealed class GaussianProcessPredictor
         }
     }
 
-    /// <summary>k_i = σ_f² c(r_i²) and slope_i = σ_f² h(r_i²) for every (padded) training point, four at a time.</summary>
-    private void KernelVector(ReadOnlySpan<double> scaled)
+    /// <summary>
+    /// k_i = σ_f² c(r_i²) and, if <paramref name="withSlope"/>, slope_i = σ_f² h(r_i²) for every (padded) training
+    /// point. Two passes, each with few live registers: one whose accumulators would otherwise be spilled to the stack
+    /// inside the innermost loop costs several times more on processors that split 256-bit stores.
+    /// </summary>
+    private void KernelVector(ReadOnlySpan<double> scaled, bool withSlope)
     {
-        int d = scaled.Length, padded = _model.PaddedCount;
-        double signal = _model.Hyperparameters.SignalVariance;
-        Span<Vector256<double>> point = stackalloc Vector256<double>[d];
-        for (int q = 0; q < d; q++)
-        {
-            point[q] = Vector256.Create(scaled[q]);
-        }
-
-        ref double inputs = ref MemoryMarshal.GetArrayDataReference(_model.ScaledInputsByDimension);
+        SquaredDistances(scaled, _kernel);
+        int padded = _model.PaddedCount;
         ref double kernel = ref MemoryMarshal.GetArrayDataReference(_kernel);
         ref double slope = ref MemoryMarshal.GetArrayDataReference(_slope);
-        var signalVector = Vector256.Create(signal);
-        bool squaredExponential = _model.Kernel == KernelKind.SquaredExponential;
+        var signal = Vector256.Create(_model.Hyperparameters.SignalVariance);
+        if (_model.Kernel == KernelKind.SquaredExponential)
+        {
+            for (int i = 0; i < padded; i += Vector256<double>.Count)
+            {
+                var k = signal * Vector256.Exp(Vector256.LoadUnsafe(ref kernel, (nuint)i) * -0.5);
+                k.StoreUnsafe(ref kernel, (nuint)i);
+                if (withSlope)
+                {
+                    k.StoreUnsafe(ref slope, (nuint)i);
+                }
+            }
+
+            return;
+        }
+
         for (int i = 0; i < padded; i += Vector256<double>.Count)
         {
-            var r2 = Vector256<double>.Zero;
+            var r2 = Vector256.LoadUnsafe(ref kernel, (nuint)i);
+            var sqrt5R = Vector256.Sqrt(r2) * Covariance.Sqrt5;
+            var e = signal * Vector256.Exp(-sqrt5R);
+            var linear = Vector256<double>.One + sqrt5R;
+            (e * (linear + (r2 * (5.0 / 3.0)))).StoreUnsafe(ref kernel, (nuint)i);
+            if (withSlope)
+            {
+                (e * linear * (5.0 / 3.0)).StoreUnsafe(ref slope, (nuint)i);
+            }
+        }
+    }
+
+    /// <summary>
+    /// r_i² = Σ_q (x̃_q − x̃_iq)² for every (padded) training point, sixteen at a time: four independent accumulators
+    /// keep the fused multiply-adds from waiting on each other, which is what limits a one-vector loop.
+    /// </summary>
+    private void SquaredDistances(ReadOnlySpan<double> scaled, double[] destination)
+    {
+        int d = scaled.Length, padded = _model.PaddedCount;
+        ref double inputs = ref MemoryMarshal.GetArrayDataReference(_model.ScaledInputsByDimension);
+        ref double result = ref MemoryMarshal.GetArrayDataReference(destination);
+        ref double point = ref MemoryMarshal.GetReference(scaled);
+        for (int i = 0; i < padded; i += GaussianProcessModel.PointBlock)
+        {
+            Vector256<double> r0 = Vector256<double>.Zero, r1 = r0, r2 = r0, r3 = r0;
+            ref double column = ref Unsafe.Add(ref inputs, i);
             for (int q = 0; q < d; q++)
             {
-                var delta = point[q] - Vector256.LoadUnsafe(ref inputs, (nuint)((q * padded) + i));
-                r2 = Vector256.FusedMultiplyAdd(delta, delta, r2);
+                var x = Vector256.Create(Unsafe.Add(ref point, q));
+                var e0 = x - Vector256.LoadUnsafe(ref column);
+                var e1 = x - Vector256.LoadUnsafe(ref column, 4);
+                var e2 = x - Vector256.LoadUnsafe(ref column, 8);
+                var e3 = x - Vector256.LoadUnsafe(ref column, 12);
+                r0 = Vector256.FusedMultiplyAdd(e0, e0, r0);
+                r1 = Vector256.FusedMultiplyAdd(e1, e1, r1);
+                r2 = Vector256.FusedMultiplyAdd(e2, e2, r2);
+                r3 = Vector256.FusedMultiplyAdd(e3, e3, r3);
+                column = ref Unsafe.Add(ref column, padded);
             }
 
-            Vector256<double> k, h;
-            if (squaredExponential)
-            {
-                k = signalVector * Vector256.Exp(r2 * -0.5);
-                h = k;
-            }
-            else
-            {
-                var sqrt5R = Vector256.Sqrt(r2) * Covariance.Sqrt5;
-                var e = signalVector * Vector256.Exp(-sqrt5R);
-                var linear = Vector256<double>.One + sqrt5R;
-                h = e * linear * (5.0 / 3.0);
-                k = e * (linear + (r2 * (5.0 / 3.0)));
-            }
-
-            k.StoreUnsafe(ref kernel, (nuint)i);
-            h.StoreUnsafe(ref slope, (nuint)i);
+            ref double target = ref Unsafe.Add(ref result, i);
+            r0.StoreUnsafe(ref target);
+            r1.StoreUnsafe(ref target, 4);
+            r2.StoreUnsafe(ref target, 8);
+            r3.StoreUnsafe(ref target, 12);
         }
     }
 

@@ -26,7 +26,8 @@ public static class GaussianProcessRegression
     /// <remarks>
     /// Bounds are enforced in log space: the likelihood is evaluated at the point clamped into the box and a quadratic
     /// penalty (weight n·m per unit of log parameter squared) pulls the iterate back, so the objective stays continuous;
-    /// the answer is the clamped point.
+    /// the answer is the clamped point. A start at which K does not factor numerically has its nugget raised a
+    /// hundredfold at a time until it does. Cost: one O(n³) factorisation and inverse per likelihood evaluation.
     /// </remarks>
     /// <param name="inputs">n × d training inputs in the unit box, one point per row; n ≥ 2, all finite.</param>
     /// <param name="outputs">n × m training outputs, one column per output, all finite.</param>
@@ -74,6 +75,7 @@ public static class GaussianProcessRegression
         {
             double[] initial = start == 0 ? InitialPoint(options, d) : RandomPoint(ref random, d);
             Clamp(initial, lower, upper, initial);
+            RaiseNoiseUntilDefined(likelihood, initial, upper[^1]);
             (double[] x, _, _) = optimiser.Minimize(Objective, initial, options.MaximumIterations);
             Clamp(x, lower, upper, x);
             double value = likelihood.Evaluate(x, []);
@@ -194,6 +196,18 @@ public static class GaussianProcessRegression
             throw new ArgumentException(
                 string.Create(CultureInfo.InvariantCulture, $"Minimum{name} = {minimum:R} and Maximum{name} = {maximum:R} must satisfy 0 < minimum ≤ maximum < ∞."),
                 "options");
+        }
+    }
+
+    /// <summary>
+    /// A start where K is not numerically positive definite (near-duplicate points, a smooth kernel, a tiny nugget)
+    /// gives the optimiser nothing to descend from, so the nugget is raised a hundredfold at a time until it is.
+    /// </summary>
+    private static void RaiseNoiseUntilDefined(MarginalLikelihood likelihood, double[] theta, double upperLogNoise)
+    {
+        while (double.IsNegativeInfinity(likelihood.Evaluate(theta, [])) && theta[^1] < upperLogNoise)
+        {
+            theta[^1] = Math.Min(upperLogNoise, theta[^1] + Math.Log(100.0));
         }
     }
 

@@ -66,4 +66,24 @@ public sealed class HyperparameterFitTests
         var second = GaussianProcessRegression.Fit(x, y, options).Hyperparameters.ToLogParameters();
         Assert.Equal(first, second);
     }
+
+    [Fact]
+    public void Fit_starts_from_a_larger_nugget_when_the_initial_covariance_is_singular()
+    {
+        // Three copies of one point with different outputs and a nugget of 1e-30 (floor lowered to allow it): K is
+        // σ_f² times a matrix of ones to double precision and fails to factor (see MarginalLikelihoodTests), so the
+        // fit must raise the nugget before it can descend; the differences between the outputs are then noise.
+        var x = Matrix<double>.Build.DenseOfArray(new double[,] { { 0.5 }, { 0.5 }, { 0.5 } });
+        var y = Matrix<double>.Build.DenseOfArray(new double[,] { { 1.0 }, { 2.0 }, { 3.0 } });
+        var model = GaussianProcessRegression.Fit(x, y, new GaussianProcessOptions
+        {
+            Kernel = KernelKind.SquaredExponential,
+            Initial = new GaussianProcessHyperparameters(1.0, [10.0], 1e-30),
+            MinimumNoiseVariance = 1e-30,
+            Restarts = 0,
+        });
+        Assert.True(double.IsFinite(model.LogMarginalLikelihood));
+        // Standardized outputs (−1.22, 0, 1.22) at one input: the likelihood wants a nugget of order their variance 1.
+        Assert.InRange(model.Hyperparameters.NoiseVariance, 0.1, 1.0);
+    }
 }
