@@ -1,5 +1,6 @@
 using System.Collections.Concurrent;
 using System.Diagnostics;
+using System.Runtime.ExceptionServices;
 using Sibyl.Training.Design;
 using Sibyl.Training.Storage;
 
@@ -46,6 +47,7 @@ public sealed class TrainingRun
     /// <param name="cancellation">Stops taking new chunks and abandons the ones in flight.</param>
     /// <exception cref="RunConflictException">The folder holds chunks of this design computed by another build.</exception>
     /// <exception cref="OperationCanceledException">Cancelled; completed chunks are stored.</exception>
+    /// <exception cref="IOException">A chunk could not be written (the first such failure).</exception>
     public RunSummary Execute(IProgress<RunProgress>? progress, Action<string>? notice, CancellationToken cancellation)
     {
         var clock = Stopwatch.StartNew();
@@ -70,17 +72,25 @@ public sealed class TrainingRun
         progress?.Report(new RunProgress(0, total, 0, clock.Elapsed));
         var options = new ParallelOptions { MaxDegreeOfParallelism = _threads, CancellationToken = cancellation };
         var partition = System.Collections.Concurrent.Partitioner.Create(todo, EnumerablePartitionerOptions.NoBuffering);
-        Parallel.ForEach(partition, options, chunk =>
+        try
         {
-            var result = Compute(chunk, cancellation, failedNow =>
+            Parallel.ForEach(partition, options, chunk =>
             {
-                int d = Interlocked.Increment(ref done);
-                int f = failedNow ? Interlocked.Increment(ref failed) : Volatile.Read(ref failed);
-                progress?.Report(new RunProgress(d, total, f, clock.Elapsed));
+                var result = Compute(chunk, cancellation, failedNow =>
+                {
+                    int d = Interlocked.Increment(ref done);
+                    int f = failedNow ? Interlocked.Increment(ref failed) : Volatile.Read(ref failed);
+                    progress?.Report(new RunProgress(d, total, f, clock.Elapsed));
+                });
+                ChunkFile.Write(_folder, result);
+                Collect(result, failures);
             });
-            ChunkFile.Write(_folder, result);
-            Collect(result, failures);
-        });
+        }
+        catch (AggregateException e) when (e.InnerExceptions.Count > 0 && e.InnerExceptions.All(x => x is IOException or UnauthorizedAccessException))
+        {
+            // A full disk or a vanished folder stops every worker the same way; the first cause is the one to report.
+            ExceptionDispatchInfo.Capture(e.InnerExceptions[0]).Throw();
+        }
 
         return new RunSummary(owned.Count, owned.Count - todo.Count, total, failures.OrderBy(f => f.Index).ToList(), clock.Elapsed);
     }
