@@ -98,11 +98,11 @@ public sealed class TrainingSet
             throw new CorruptFileException(path, $"its spec does not pass the checks of this build: {string.Join("; ", e.Problems)}");
         }
 
-        int n = contract.Values.Length, terms = contract.TermNames.Length;
-        int perPoint = Runs.TrainingOutput.RedshiftsPerPoint(spec) * terms * spec.K.Count;
+        var layout = contract.Layout.ToLayout(path);
+        int n = contract.Values.Length;
+        int perPoint = Runs.TrainingOutput.RedshiftsPerPoint(spec) * layout.Terms.Count * spec.K.Count;
         bool consistent = GridSpecJson.Hash(spec) == contract.SpecHash && n == spec.TotalPoints && contract.Errors.Length == n
-                          && contract.Unit.Length == n * spec.Varied.Count && contract.TermObservables.Length == terms
-                          && contract.TermPrefactors.Length == terms && contract.TermFactors.Length == terms;
+                          && contract.Unit.Length == n * spec.Varied.Count;
         for (int i = 0; consistent && i < n; i++)
         {
             consistent = contract.Values[i] is { } v ? v.Length == perPoint && contract.Errors[i] is null : contract.Errors[i] is not null;
@@ -111,19 +111,6 @@ public sealed class TrainingSet
         if (!consistent)
         {
             throw new CorruptFileException(path, "inconsistent: its sizes do not match its spec");
-        }
-
-        BasisLayout layout;
-        try
-        {
-            layout = new BasisLayout(
-                contract.Observables,
-                contract.Nuisance,
-                [.. Enumerable.Range(0, terms).Select(t => new BasisTerm(contract.TermNames[t], contract.TermObservables[t], contract.TermPrefactors[t], contract.TermFactors[t]))]);
-        }
-        catch (ArgumentException e)
-        {
-            throw new CorruptFileException(path, $"inconsistent basis layout: {e.Message}");
         }
 
         return new TrainingSet(contract, spec, layout);
@@ -145,12 +132,7 @@ public sealed class TrainingSet
             DesignHash = design.Hash,
             CodeFingerprint = codeFingerprint,
             Unit = unit,
-            Observables = [.. layout.Observables],
-            Nuisance = [.. layout.Nuisance],
-            TermNames = [.. layout.Terms.Select(t => t.Name)],
-            TermObservables = [.. layout.Terms.Select(t => t.Observable)],
-            TermPrefactors = [.. layout.Terms.Select(t => t.Prefactor)],
-            TermFactors = [.. layout.Terms.Select(t => t.NuisanceFactors.ToArray())],
+            Layout = BasisLayoutContract.From(layout),
             Values = values,
             Errors = errors,
         };

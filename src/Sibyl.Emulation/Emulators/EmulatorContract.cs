@@ -1,4 +1,5 @@
 using MessagePack;
+using Sibyl.Training.Storage;
 
 namespace Sibyl.Emulation.Emulators;
 
@@ -38,48 +39,28 @@ public sealed class EmulatorContract
     [Key(7)]
     public double[] Redshifts { get; set; } = [];
 
-    /// <summary>Basis layout: observables.</summary>
+    /// <summary>The basis layout of the predicted spectra.</summary>
     [Key(8)]
-    public string[] Observables { get; set; } = [];
-
-    /// <summary>Basis layout: nuisance parameters.</summary>
-    [Key(9)]
-    public string[] Nuisance { get; set; } = [];
-
-    /// <summary>Basis layout: term names.</summary>
-    [Key(10)]
-    public string[] TermNames { get; set; } = [];
-
-    /// <summary>Basis layout: observable of each term.</summary>
-    [Key(11)]
-    public int[] TermObservables { get; set; } = [];
-
-    /// <summary>Basis layout: prefactor of each term.</summary>
-    [Key(12)]
-    public double[] TermPrefactors { get; set; } = [];
-
-    /// <summary>Basis layout: nuisance factors of each term.</summary>
-    [Key(13)]
-    public int[][] TermFactors { get; set; } = [];
+    public BasisLayoutContract Layout { get; set; } = new();
 
     /// <summary>Unit-box coordinates of the training points, row-major.</summary>
-    [Key(14)]
+    [Key(9)]
     public double[] TrainingInputs { get; set; } = [];
 
     /// <summary>One block per slice and term (index slice·terms + term).</summary>
-    [Key(15)]
+    [Key(10)]
     public BlockContract[] Blocks { get; set; } = [];
 
     /// <summary>The Gaussian processes.</summary>
-    [Key(16)]
+    [Key(11)]
     public ProcessContract[] Processes { get; set; } = [];
 
     /// <summary>Accuracy measured on the held-out points when it was fitted.</summary>
-    [Key(17)]
+    [Key(12)]
     public AccuracyContract Accuracy { get; set; } = new();
 
     /// <summary><see cref="InputWarp"/> of each parameter, as integers.</summary>
-    [Key(18)]
+    [Key(13)]
     public int[] InputWarps { get; set; } = [];
 }
 

@@ -5,6 +5,7 @@ using Sibyl.Emulation.Compression;
 using Sibyl.Emulation.Gaussian;
 using Sibyl.Emulation.Validation;
 using Sibyl.Training;
+using Sibyl.Training.Storage;
 
 namespace Sibyl.Emulation.Emulators;
 
@@ -70,12 +71,7 @@ public static class EmulatorFitter
             Max = [.. set.Spec.Varied.Select(v => v.Max)],
             K = set.K.ToArray(),
             Redshifts = set.Spec.VariesRedshift ? [] : [.. set.Spec.Redshifts],
-            Observables = [.. set.Layout.Observables],
-            Nuisance = [.. set.Layout.Nuisance],
-            TermNames = [.. set.Layout.Terms.Select(x => x.Name)],
-            TermObservables = [.. set.Layout.Terms.Select(x => x.Observable)],
-            TermPrefactors = [.. set.Layout.Terms.Select(x => x.Prefactor)],
-            TermFactors = [.. set.Layout.Terms.Select(x => x.NuisanceFactors.ToArray())],
+            Layout = BasisLayoutContract.From(set.Layout),
             TrainingInputs = [.. Enumerable.Range(0, training.Length).SelectMany(i => Enumerable.Range(0, d).Select(q => inputs[i, q]))],
             Blocks = blocks,
             Processes = processes,

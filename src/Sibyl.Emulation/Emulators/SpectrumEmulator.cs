@@ -35,7 +35,8 @@ public sealed class SpectrumEmulator
             throw new CorruptFileException(source, $"its spec does not pass the checks of this build: {string.Join("; ", e.Problems)}");
         }
 
-        int d = contract.ParameterNames.Length, nk = contract.K.Length, terms = contract.TermNames.Length;
+        Layout = contract.Layout.ToLayout(source);
+        int d = contract.ParameterNames.Length, nk = contract.K.Length, terms = Layout.Terms.Count;
         SliceCount = Math.Max(1, contract.Redshifts.Length);
         if (d == 0 || contract.Min.Length != d || contract.Max.Length != d || contract.InputWarps.Length != d || nk == 0 || terms == 0
             || contract.Blocks.Length != SliceCount * terms || contract.TrainingInputs.Length % d != 0)
@@ -43,10 +44,6 @@ public sealed class SpectrumEmulator
             throw new CorruptFileException(source, "inconsistent: its sizes do not agree");
         }
 
-        Layout = new BasisLayout(
-            contract.Observables,
-            contract.Nuisance,
-            [.. Enumerable.Range(0, terms).Select(t => new BasisTerm(contract.TermNames[t], contract.TermObservables[t], contract.TermPrefactors[t], contract.TermFactors[t]))]);
         Blocks = [.. contract.Blocks.Select(b => PrincipalComponents.FromArrays(b.Mean, b.Scale, b.Basis, b.SingularValues, b.MaximumError, b.RmsError, b.ExplainedFraction))];
         Transforms = [.. contract.Blocks.Select(b => Enum.IsDefined((TargetTransform)b.Transform) ? (TargetTransform)b.Transform : throw new CorruptFileException(source, "unknown transform"))];
         if (Blocks.Any(b => b.FeatureCount != nk))
@@ -91,7 +88,7 @@ public sealed class SpectrumEmulator
             throw new CorruptFileException(source, "inconsistent: a principal component has no Gaussian process");
         }
 
-        Accuracy = new AccuracyReport(contract.Accuracy, [.. contract.TermNames], contract.K);
+        Accuracy = new AccuracyReport(contract.Accuracy, [.. Layout.Terms.Select(t => t.Name)], contract.K);
         Warps = [.. contract.InputWarps.Select(w => Enum.IsDefined((InputWarp)w) ? (InputWarp)w : throw new CorruptFileException(source, "unknown input warp"))];
     }
 

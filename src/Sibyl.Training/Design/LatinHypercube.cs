@@ -39,7 +39,4 @@ public static class LatinHypercube
 
         return design;
     }
-
-    /// <summary>The stratum index ⌊n x⌋ of coordinate value x ∈ [0, 1) for n points.</summary>
-    public static int Stratum(double x, int points) => Math.Min(points - 1, (int)Math.Floor(x * points));
 }

@@ -26,35 +26,15 @@ public sealed class TrainingSetContract
     [Key(4)]
     public double[] Unit { get; set; } = [];
 
-    /// <summary>Observable names of the basis layout.</summary>
+    /// <summary>The basis layout of every point's spectra.</summary>
     [Key(5)]
-    public string[] Observables { get; set; } = [];
-
-    /// <summary>Nuisance-parameter names of the basis layout.</summary>
-    [Key(6)]
-    public string[] Nuisance { get; set; } = [];
-
-    /// <summary>Basis term names.</summary>
-    [Key(7)]
-    public string[] TermNames { get; set; } = [];
-
-    /// <summary>Observable index of each term.</summary>
-    [Key(8)]
-    public int[] TermObservables { get; set; } = [];
-
-    /// <summary>Fixed prefactor of each term.</summary>
-    [Key(9)]
-    public double[] TermPrefactors { get; set; } = [];
-
-    /// <summary>Nuisance factors of each term.</summary>
-    [Key(10)]
-    public int[][] TermFactors { get; set; } = [];
+    public BasisLayoutContract Layout { get; set; } = new();
 
     /// <summary>Per point: redshift-major, term-major values over k, or null when it failed.</summary>
-    [Key(11)]
+    [Key(6)]
     public double[]?[] Values { get; set; } = [];
 
     /// <summary>Per point: null, or what went wrong.</summary>
-    [Key(12)]
+    [Key(7)]
     public string?[] Errors { get; set; } = [];
 }
