@@ -51,7 +51,8 @@ internal static class HelpText
         options:
           --out FOLDER    [DESIGN with .run instead of .design] run folder, shared by all shards
           --shard I/N     [0/1] compute only chunks c with c mod N = I (0 <= I < N), for a job array:
-                          e.g. --shard $SLURM_ARRAY_TASK_ID/$SLURM_ARRAY_TASK_COUNT with --array=0-(N-1)
+                          e.g. --shard $SLURM_ARRAY_TASK_ID/N with --array=0-(N-1); write N itself, since
+                          resubmitting some tasks changes the array's task count (training-grids/slurm/)
           --threads N     [number of cores] worker threads
           --retry-failed  compute stored chunks with failed points again
           --help          this text

@@ -31,7 +31,7 @@ public sealed record ShardSelection(int Index, int Count)
             || !int.TryParse(parts[1], NumberStyles.None, CultureInfo.InvariantCulture, out int count)
             || count < 1 || index >= count)
         {
-            throw new FormatException($"'{text}' must be I/N with N >= 1 and 0 <= I < N (for a job array numbered from 0: $TASK_ID/$TASK_COUNT)");
+            throw new FormatException($"'{text}' must be I/N with N >= 1 and 0 <= I < N (for a job array numbered from 0: the task's index / the number of shards)");
         }
 
         return new ShardSelection(index, count);
