@@ -198,7 +198,6 @@ public sealed class SpectrumEmulator
         for (int q = 0; q < parameters.Length; q++)
         {
             double v = parameters[q];
-            string range = string.Create(CultureInfo.InvariantCulture, $"[{Min[q]:G}, {Max[q]:G}]");
             if (!double.IsFinite(v))
             {
                 throw new ParameterOutOfRangeException(ParameterNames[q], $"must be finite, got {v.ToString(CultureInfo.InvariantCulture)}");
@@ -209,7 +208,8 @@ public sealed class SpectrumEmulator
                 if (!allowExtrapolation)
                 {
                     throw new ParameterOutOfRangeException(
-                        ParameterNames[q], string.Create(CultureInfo.InvariantCulture, $"{v:G} is outside the emulator's box {range}; the emulator is valid only inside it"));
+                        ParameterNames[q],
+                        string.Create(CultureInfo.InvariantCulture, $"{v:G} is outside the emulator's box [{Min[q]:G}, {Max[q]:G}]; the emulator is valid only inside it"));
                 }
 
                 inside = false;

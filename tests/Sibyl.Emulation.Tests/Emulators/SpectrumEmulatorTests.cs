@@ -121,4 +121,23 @@ public sealed class SpectrumEmulatorTests(SmallEmulatorFixture fixture)
         Assert.Equal(1, _emulator.SliceOf(1.0));
         Assert.Throws<ParameterOutOfRangeException>(() => _emulator.SliceOf(0.7));
     }
+
+    [Fact]
+    public void Prediction_allocates_nothing_once_the_predictor_exists()
+    {
+        var predictor = _emulator.CreatePredictor();
+        int size = _emulator.Layout.Terms.Count * _emulator.K.Count, d = _emulator.ParameterNames.Count;
+        double[] point = [0.12, 0.8];
+        var values = new double[size];
+        var gradient = new double[size * d];
+        predictor.Predict(point, 1, values, [], gradient);
+        long before = GC.GetAllocatedBytesForCurrentThread();
+        for (int i = 0; i < 10; i++)
+        {
+            predictor.Predict(point);
+            predictor.Predict(point, 1, values, [], gradient);
+        }
+
+        Assert.Equal(0, GC.GetAllocatedBytesForCurrentThread() - before);
+    }
 }
