@@ -165,7 +165,7 @@ public static class FitCommand
         text.AppendLine(c, $"#   its marginalised parameters at their conditional mean: {string.Join(", ", likelihood.MarginalisedNames.Select((n, q) => $"{n} = {bestValue.LinearMean[q]:G4}"))}");
         text.AppendLine(c, $"#   chi2 there {bestValue.Chi2:F2} for {posterior.Names.Count} + {likelihood.MarginalisedNames.Count} fitted parameters and the data's {scenario.Multipoles.Length * scenario.BinCentres().Length} points");
         double perEvaluation = elapsed.TotalMilliseconds / Math.Max(1, posterior.Evaluations);
-        text.AppendLine(c, $"# wall clock: {elapsed.TotalSeconds:F1} s for {posterior.Evaluations} likelihood evaluations ({perEvaluation:F4} ms each, {Environment.ProcessorCount} cores)");
+        text.AppendLine(c, $"# wall clock: {elapsed.TotalSeconds:F1} s for {posterior.Evaluations} likelihood evaluations ({perEvaluation:F4} ms each, {posterior.TheoryTime.TotalMilliseconds / Math.Max(1, posterior.Evaluations):F4} ms of it in the theory; {Environment.ProcessorCount} cores)");
         return text.ToString();
     }
 }

@@ -16,8 +16,8 @@ public sealed class MultipoleLikelihood
 {
     private readonly DataVector _data;
     private readonly BasisLayout _layout;
-    private readonly Matrix<double> _inverseCovariance;
-    private readonly Vector<double> _d;
+    private readonly double[] _inverseCovariance;
+    private readonly double[] _d;
     private readonly int[] _observables;
     private readonly int[] _sampled;
     private readonly int[] _marginalised;
@@ -53,8 +53,8 @@ public sealed class MultipoleLikelihood
             }
         }
 
-        _inverseCovariance = Matrix<double>.Build.DenseOfArray(data.Covariance).Cholesky().Solve(Matrix<double>.Build.DenseIdentity(data.Length));
-        _d = Vector<double>.Build.DenseOfArray(data.Values);
+        _inverseCovariance = Matrix<double>.Build.DenseOfArray(data.Covariance).Cholesky().Solve(Matrix<double>.Build.DenseIdentity(data.Length)).ToRowMajorArray();
+        _d = data.Values;
     }
 
     /// <summary>Names of the sampled nuisance parameters, in the order <see cref="Evaluate"/> expects them.</summary>
@@ -79,34 +79,62 @@ public sealed class MultipoleLikelihood
             nuisance[m] = 0.0;
         }
 
-        var m0 = Vector<double>.Build.DenseOfArray(Model(basis, nuisance));
-        var design = Matrix<double>.Build.Dense(_data.Length, _marginalised.Length);
-        for (int p = 0; p < _marginalised.Length; p++)
+        // Plain arrays rather than a matrix library: the sizes are tiny (n ≈ 50 data, p ≈ 5 parameters), and a library's
+        // allocations and internal threading cost more than the arithmetic inside a sampler that is already parallel.
+        int n = _data.Length, p = _marginalised.Length;
+        var m0 = Model(basis, nuisance);
+        var design = new double[p][];
+        for (int j = 0; j < p; j++)
         {
-            nuisance[_marginalised[p]] = 1.0;
-            design.SetColumn(p, Vector<double>.Build.DenseOfArray(Model(basis, nuisance)) - m0);
-            nuisance[_marginalised[p]] = 0.0;
+            nuisance[_marginalised[j]] = 1.0;
+            design[j] = Model(basis, nuisance);
+            nuisance[_marginalised[j]] = 0.0;
+            for (int i = 0; i < n; i++)
+            {
+                design[j][i] -= m0[i];
+            }
         }
 
-        var r = _d - m0;
-        var cInvR = _inverseCovariance * r;
-        var cInvA = _inverseCovariance * design;
-        var fisher = design.TransposeThisAndMultiply(cInvA);
-        var b = design.TransposeThisAndMultiply(cInvR);
+        var r = new double[n];
+        for (int i = 0; i < n; i++)
+        {
+            r[i] = _d[i] - m0[i];
+        }
+
+        var cInvR = Multiply(r);
+        var cInvA = design.Select(Multiply).ToArray();
+        var fisher = new double[p * p];
+        var b = new double[p];
         double priorTerm = 0.0;
-        for (int p = 0; p < _marginalised.Length; p++)
+        for (int j = 0; j < p; j++)
         {
-            fisher[p, p] += _priorPrecision[p];
-            b[p] += _priorPrecision[p] * _priorMean[p];
-            priorTerm += _priorPrecision[p] * _priorMean[p] * _priorMean[p];
+            for (int l = 0; l < p; l++)
+            {
+                fisher[(j * p) + l] = Dot(design[j], cInvA[l]);
+            }
+
+            fisher[(j * p) + j] += _priorPrecision[j];
+            b[j] = Dot(design[j], cInvR) + (_priorPrecision[j] * _priorMean[j]);
+            priorTerm += _priorPrecision[j] * _priorMean[j] * _priorMean[j];
         }
 
-        var cholesky = fisher.Cholesky();
-        var mean = cholesky.Solve(b);
-        double minusTwoLnL = r.DotProduct(cInvR) + priorTerm - b.DotProduct(mean) + cholesky.DeterminantLn;
-        var residual = r - (design * mean);
-        double chi2 = residual.DotProduct(_inverseCovariance * residual);
-        return new LikelihoodValue(minusTwoLnL, chi2, mean.ToArray());
+        double logDetF = SmallCholesky.Factor(fisher, p);
+        var mean = (double[])b.Clone();
+        SmallCholesky.Solve(fisher, p, mean);
+        double minusTwoLnL = Dot(r, cInvR) + priorTerm - Dot(b, mean) + logDetF;
+
+        // χ² of r − A·mean: rᵀC⁻¹r − 2 meanᵀ(AᵀC⁻¹r) + meanᵀ(AᵀC⁻¹A)mean, with the data part of F (prior removed).
+        double chi2 = Dot(r, cInvR);
+        for (int j = 0; j < p; j++)
+        {
+            chi2 -= 2.0 * mean[j] * Dot(design[j], cInvR);
+            for (int l = 0; l < p; l++)
+            {
+                chi2 += mean[j] * mean[l] * Dot(design[j], cInvA[l]);
+            }
+        }
+
+        return new LikelihoodValue(minusTwoLnL, chi2, mean);
     }
 
     /// <summary>The model vector (data order) for every nuisance value, in the layout's order.</summary>
@@ -143,6 +171,29 @@ public sealed class MultipoleLikelihood
         }
 
         return nuisance;
+    }
+
+    private double[] Multiply(double[] x)
+    {
+        int n = x.Length;
+        var y = new double[n];
+        for (int i = 0; i < n; i++)
+        {
+            y[i] = Dot(_inverseCovariance.AsSpan(i * n, n), x);
+        }
+
+        return y;
+    }
+
+    private static double Dot(ReadOnlySpan<double> a, ReadOnlySpan<double> b)
+    {
+        double sum = 0.0;
+        for (int i = 0; i < a.Length; i++)
+        {
+            sum += a[i] * b[i];
+        }
+
+        return sum;
     }
 
     private static int IndexOf(IReadOnlyList<string> names, string name)

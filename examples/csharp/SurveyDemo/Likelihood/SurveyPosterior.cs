@@ -1,3 +1,4 @@
+using System.Diagnostics;
 using Sibyl.Demo.Sampling;
 using Sibyl.Demo.Survey;
 using Sibyl.Demo.Theory;
@@ -49,6 +50,9 @@ public sealed class SurveyPosterior : IBatchLogDensity
     /// <summary>Theory evaluations so far (points inside the priors).</summary>
     public long Evaluations { get; private set; }
 
+    /// <summary>Wall-clock time spent in the theory so far (the rest of a likelihood is the linear algebra).</summary>
+    public TimeSpan TheoryTime { get; private set; }
+
     /// <summary>Lower edges of the flat priors, in sampling order.</summary>
     public double[] Min => [.. _theory.Min, .. _nuisance.Select(n => n.Min)];
 
@@ -86,14 +90,13 @@ public sealed class SurveyPosterior : IBatchLogDensity
     {
         ArgumentNullException.ThrowIfNull(points);
         int d = _theory.ParameterNames.Count;
+        long start = Stopwatch.GetTimestamp();
         var spectra = _theory.PredictAsync([.. points.Select(p => p[..d])]).GetAwaiter().GetResult();
+        TheoryTime += Stopwatch.GetElapsedTime(start);
         Evaluations += points.Count;
+        // The linear algebra of each point is independent (and the likelihood keeps no state), so it runs on all cores too.
         var values = new LikelihoodValue[points.Count];
-        for (int j = 0; j < points.Count; j++)
-        {
-            values[j] = _likelihood.Evaluate(spectra[j], points[j].AsSpan(d));
-        }
-
+        Parallel.For(0, points.Count, j => values[j] = _likelihood.Evaluate(spectra[j], points[j].AsSpan(d)));
         return values;
     }
 
