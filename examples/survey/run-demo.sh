@@ -30,11 +30,12 @@ scenario="$here/scenario.json"
 mkdir -p "$out"
 cd "$out"
 sibyl="$root/sibyl"
-demo="$out/bin/survey-demo"
+# Built in place (bin/ is ignored by git), so a second run reuses the build.
+demo="$root/examples/csharp/SurveyDemo/bin/Release/net10.0/survey-demo"
 log() { printf '\n== %s\n' "$*" >&2; }
 
 log "building the demo program"
-dotnet build "$root/examples/csharp/SurveyDemo/SurveyDemo.csproj" -c Release -o "$out/bin" --nologo -v quiet >&2
+dotnet build "$root/examples/csharp/SurveyDemo/SurveyDemo.csproj" -c Release --nologo -v quiet >&2
 
 log "training set: plan, run, merge ($(basename "$spec"))"
 "$sibyl" plan "$spec" --out survey.design

@@ -1,5 +1,5 @@
-using Sibyl.Cosmology.Parameters;
 using Sibyl.Demo.Commands;
+using Sibyl.Training.Specs;
 
 namespace Sibyl.Demo;
 
@@ -44,7 +44,7 @@ public static class Program
         {
             return run(args[1..]);
         }
-        catch (Exception e) when (e is ArgumentException or InvalidDataException or FileNotFoundException or ParameterOutOfRangeException)
+        catch (Exception e) when (e is ArgumentException or IOException or InvalidDataException or GridSpecException)
         {
             Console.Error.WriteLine($"survey-demo {args[0]}: {e.Message}");
             return 2;

@@ -71,7 +71,7 @@ public static class MakeDataCommand
         var lower = Matrix<double>.Build.DenseOfArray(covariance).Cholesky().Factor;
         var random = new Random(scenario.NoiseSeed);
         var normal = Vector<double>.Build.Dense(truth.Length, _ => StandardNormal(random));
-        double[] values = [.. (Vector<double>.Build.DenseOfArray(truth) + (lower * normal)).ToArray()];
+        double[] values = (Vector<double>.Build.DenseOfArray(truth) + (lower * normal)).ToArray();
         var data = new DataVector(k, scenario.Multipoles, values, covariance);
         string header = $"INVENTED survey '{scenario.Name}' (not any real survey), z = {scenario.Redshift.ToString(CultureInfo.InvariantCulture)}; synthetic data from the direct calculation at the hidden parameters plus seeded Gaussian noise";
         data.Write(Path.Combine(folder, "data.csv"), Path.Combine(folder, "covariance.csv"), header);

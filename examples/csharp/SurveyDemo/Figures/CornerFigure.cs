@@ -56,8 +56,7 @@ public static class CornerFigure
                 }
                 else
                 {
-                    var points = plot.Add.Markers(thinned.Select(s => s[column]).ToArray(), thinned.Select(s => s[row]).ToArray(), MarkerShape.FilledCircle, 2, Colors.Navy.WithAlpha(0.3));
-                    points.LegendText = string.Empty;
+                    plot.Add.Markers(thinned.Select(s => s[column]).ToArray(), thinned.Select(s => s[row]).ToArray(), MarkerShape.FilledCircle, 2, Colors.Navy.WithAlpha(0.3));
                     if (double.IsFinite(injected[column]))
                     {
                         plot.Add.VerticalLine(injected[column], 1.5f, truthColor);

@@ -31,7 +31,6 @@ public static class MultipoleFigure
             plot.Font.Set(FigureFont.Sans);
         }
 
-        double[] fineK = [.. Enumerable.Range(0, nk).Select(i => data.K[i])];
         for (int s = 0; s < data.Ells.Length; s++)
         {
             var color = Palette.GetColor(s);
@@ -40,16 +39,16 @@ public static class MultipoleFigure
             double[] curve = [.. Enumerable.Range(0, nk).Select(i => data.K[i] * model[(s * nk) + i])];
             double[] pull = [.. Enumerable.Range(0, nk).Select(i => (data.Values[(s * nk) + i] - model[(s * nk) + i]) / data.Sigma((s * nk) + i))];
 
-            var bars = top.Add.ErrorBar(fineK, y, error);
+            var bars = top.Add.ErrorBar(data.K, y, error);
             bars.Color = color;
-            var points = top.Add.Markers(fineK, y, MarkerShape.FilledCircle, 6, color);
+            var points = top.Add.Markers(data.K, y, MarkerShape.FilledCircle, 6, color);
             points.LegendText = $"data P{data.Ells[s]}";
-            var line = top.Add.Scatter(fineK, curve, color);
+            var line = top.Add.Scatter(data.K, curve, color);
             line.MarkerSize = 0;
             line.LineWidth = 2;
             line.LegendText = $"{modelName} P{data.Ells[s]}";
 
-            var residual = bottom.Add.Markers(fineK, pull, MarkerShape.FilledCircle, 6, color);
+            var residual = bottom.Add.Markers(data.K, pull, MarkerShape.FilledCircle, 6, color);
             residual.LegendText = $"P{data.Ells[s]}";
         }
 

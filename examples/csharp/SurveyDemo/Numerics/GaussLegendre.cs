@@ -17,11 +17,9 @@ public static class GaussLegendre
         for (int i = 0; i < (n + 1) / 2; i++)
         {
             double x = Math.Cos(Math.PI * (i + 0.75) / (n + 0.5));
-            double derivative = 0.0;
             for (int iteration = 0; iteration < 100; iteration++)
             {
                 (double p, double dp) = Legendre(n, x);
-                derivative = dp;
                 double step = p / dp;
                 x -= step;
                 if (Math.Abs(step) < 1e-15)
@@ -30,7 +28,7 @@ public static class GaussLegendre
                 }
             }
 
-            derivative = Legendre(n, x).Derivative;
+            double derivative = Legendre(n, x).Derivative;
             double w = 2.0 / ((1.0 - (x * x)) * derivative * derivative);
             nodes[i] = -x;
             nodes[n - 1 - i] = x;

@@ -18,6 +18,9 @@ public sealed class EmulatorTheory : ISpectrumTheory, IDisposable
     private readonly double[] _k;
 
     /// <summary>Uses the slice of <paramref name="redshift"/> of <paramref name="emulator"/>.</summary>
+    /// <param name="emulator">A loaded emulator of the galaxy basis.</param>
+    /// <param name="source">Names the emulator in descriptions (for example its file name).</param>
+    /// <param name="redshift">One of the emulator's redshift slices.</param>
     /// <exception cref="Cosmology.Parameters.ParameterOutOfRangeException">The emulator has no slice at that redshift.</exception>
     public EmulatorTheory(SpectrumEmulator emulator, string source, double redshift)
     {
