@@ -25,7 +25,8 @@ public static class CompareCommand
         emulator and with the direct calculation (same grid spec, read from the emulator file), both in batches
         of the size the chain used (half the walkers), on all cores. Reports the distribution of |delta chi2|
         for -2 ln L with the linear nuisance parameters marginalised (what the chain samples) and for chi2 at
-        their conditional best fit, and the wall-clock time per likelihood of each theory.
+        their conditional best fit, and the wall-clock and CPU time per likelihood of each theory (timed
+        batch by batch in turn, so that both see the same load from other programs).
 
         options:
           --points N    [200] chain points compared

@@ -102,6 +102,7 @@ public static class FitCommand
         double[] min = posterior.Min, max = posterior.Max;
         int d = posterior.Dimension - scenario.SampledNuisance.Length;
         double[] centre = [.. min.Take(d).Zip(max.Take(d), (a, b) => 0.5 * (a + b)), .. scenario.SampledNuisance.Select(s => s.Start)];
+        // A stream apart from the sampler's (which takes the seed itself), so the ball does not echo its first draws.
         var random = new Random(seed ^ 0x5EED);
         var start = new double[walkers][];
         for (int w = 0; w < walkers; w++)

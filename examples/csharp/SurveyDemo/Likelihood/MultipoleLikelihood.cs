@@ -74,10 +74,6 @@ public sealed class MultipoleLikelihood
         }
 
         var nuisance = Nuisance(sampled);
-        foreach (int m in _marginalised)
-        {
-            nuisance[m] = 0.0;
-        }
 
         // Plain arrays rather than a matrix library: the sizes are tiny (n ≈ 50 data, p ≈ 5 parameters), and a library's
         // allocations and internal threading cost more than the arithmetic inside a sampler that is already parallel.
