@@ -7,7 +7,8 @@ namespace Sibyl.Demo.Tests.Sampling;
 /// several Monte Carlo standard errors: with 32 walkers × 3000 kept steps and an autocorrelation time of a few tens of
 /// steps for these targets (the paper's Gaussian examples), about 3000 effective samples remain, so the standard error
 /// of a mean is about 0.02σ and of a variance about 0.03σ² (√(2/N_eff)); the chains are seeded, so the tests are
-/// deterministic and the margins only guard against a seed that happens to be unlucky.
+/// deterministic and the margins only guard against a seed that happens to be unlucky. The moment tests have power:
+/// with the acceptance factor z^{d−1} replaced by z^d (a broken detailed balance) both of them fail.
 /// </summary>
 public sealed class EnsembleSamplerTests
 {
