@@ -12,14 +12,19 @@ internal static class AccuracyOutput
     // A log axis cannot show an exact zero; errors below this are invisible at any useful scale anyway.
     private const double SmallestShown = 1e-9;
 
+    // A galaxy emulator has dozens of terms; a figure of them all would be unreadable (and too tall to draw).
+    private const int MaxPanels = 8;
+
     public static void Write(AccuracyReport report, string title, string prefix, TextWriter stderr)
     {
         AtomicFile.WriteAllBytes(prefix + ".txt", Encoding.UTF8.GetBytes(report.ToText(title)));
         var figure = new SpectrumFigure("k [h/Mpc]", AxisScale.Log10);
-        for (int t = 0; t < report.TermNames.Count; t++)
+        var shown = Enumerable.Range(0, report.TermNames.Count).OrderByDescending(t => report.Worst99(t)).Take(MaxPanels).Order().ToList();
+        foreach (int t in shown)
         {
             string metric = report.IsRelative(t) ? "|emulated/direct - 1|" : "|emulated - direct| / rms";
-            var panel = figure.AddPanel($"{report.TermNames[t]} ({report.Points} {report.Source} points)", metric, AxisScale.Log10);
+            string of = shown.Count < report.TermNames.Count ? $"; {MaxPanels} worst of {report.TermNames.Count} terms, all in the .txt" : "";
+            var panel = figure.AddPanel($"{report.TermNames[t]} ({report.Points} {report.Source} points{of})", metric, AxisScale.Log10);
             foreach (int percentile in new[] { 50, 90, 99, 100 })
             {
                 var curve = report.Curve(t, percentile).ToArray().Select(v => Math.Max(v, SmallestShown)).ToArray();
