@@ -42,6 +42,8 @@ internal static class Entry
                 ["merge", .. var rest] => MergeCommand.Run(rest, stdout, stderr),
                 ["fit", .. var rest] => FitCommand.Run(rest, stdout, stderr),
                 ["check", .. var rest] => CheckCommand.Run(rest, stdout, stderr),
+                ["serve", .. var rest] => ServeCommand.Run(rest, stdout, stderr),
+                ["ask", .. var rest] => AskCommand.Run(rest, stdout, stderr),
                 _ => throw new UsageException($"unknown command '{args[0]}'; try sibyl --help"),
             };
         }
