@@ -53,7 +53,7 @@ internal static class ServeCommand
             .GetAwaiter().GetResult();
         try
         {
-            stdout.WriteLine($"sibyl serve: listening on {server.Address} (gRPC {SibylServer.ServiceName}, health, reflection; Ctrl-C or SIGTERM stops): {string.Join("; ", server.Summaries)}");
+            stdout.WriteLine($"sibyl serve: listening on {server.Address.GetLeftPart(UriPartial.Authority)} (gRPC {SibylServer.ServiceName}, health, reflection; Ctrl-C or SIGTERM stops): {string.Join("; ", server.Summaries)}");
             stdout.Flush();
             server.WaitForShutdownAsync().GetAwaiter().GetResult();
         }
