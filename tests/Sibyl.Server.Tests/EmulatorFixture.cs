@@ -18,7 +18,7 @@ public sealed class EmulatorFixture : IDisposable
           "name": "server-slices", "output": "matter", "model": "lcdm",
           "vary": { "omega_cdm": [0.10, 0.14], "sigma8": [0.72, 0.90] },
           "redshifts": [0.5, 1.0],
-          "k": { "min": 0.01, "max": 0.3, "count": 30 },
+          "k": { "min": 0.01, "max": 0.3, "count": 60 },
           "points": { "training": 40, "heldout": 10 }, "seed": 7, "chunk_size": 8
         }
         """;

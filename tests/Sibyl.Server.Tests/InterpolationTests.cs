@@ -11,7 +11,7 @@ public sealed class InterpolationTests(ServerFixture fixture)
     {
         // At a knot the spline returns the knot value; exp(ln |P|) then costs a few ulps (|ln P| ≲ 10 → ≲ 1e-14).
         var grid = await fixture.Client.PredictAsync(Basis(Reference.Slices(0.12, 0.8, 0.5, cs2: 1.0)));
-        int[] picked = [0, 7, 13, 29];
+        int[] picked = [0, 7, 13, 59];
         var request = Basis(Reference.Slices(0.12, 0.8, 0.5, cs2: 1.0));
         request.K.Add(picked.Select(i => fixture.Slices.K[i]));
         var reply = await fixture.Client.PredictAsync(request);
