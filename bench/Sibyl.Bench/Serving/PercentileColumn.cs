@@ -6,9 +6,10 @@ using BenchmarkDotNet.Running;
 namespace Sibyl.Bench.Serving;
 
 /// <summary>
-/// A percentile of the iteration times, in microseconds. With one invocation per iteration (<see cref="LatencyConfig"/>)
-/// every iteration is one call, so this is the percentile of single round trips, which BenchmarkDotNet's built-in
-/// columns stop short of (they end at P95).
+/// A percentile of the iteration times, in microseconds. With one invocation per iteration (the "single-call" job of
+/// <see cref="LatencyConfig"/>) every iteration is one call, so this is the percentile of single round trips, which
+/// BenchmarkDotNet's built-in columns stop short of (they end at P95); with many calls per iteration it is a
+/// percentile of iteration means.
 /// </summary>
 public sealed class PercentileColumn(int percentile) : IColumn
 {
@@ -26,7 +27,7 @@ public sealed class PercentileColumn(int percentile) : IColumn
 
     public UnitType UnitType => UnitType.Dimensionless;
 
-    public string Legend => $"{percentile}th percentile of one call's time, microseconds";
+    public string Legend => $"{percentile}th percentile of the iteration times per operation (of single calls with one call per iteration), microseconds";
 
     public string GetValue(Summary summary, BenchmarkCase benchmarkCase) => GetValue(summary, benchmarkCase, SummaryStyle.Default);
 
