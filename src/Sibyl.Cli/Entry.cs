@@ -43,6 +43,8 @@ internal static class Entry
                 ["fit", .. var rest] => FitCommand.Run(rest, stdout, stderr),
                 ["check", .. var rest] => CheckCommand.Run(rest, stdout, stderr),
                 ["quickstart", .. var rest] => QuickstartCommand.Run(rest, stdout, stderr, interactive),
+                ["serve", .. var rest] => ServeCommand.Run(rest, stdout, stderr),
+                ["ask", .. var rest] => AskCommand.Run(rest, stdout, stderr),
                 _ => throw new UsageException($"unknown command '{args[0]}'; try sibyl --help"),
             };
         }

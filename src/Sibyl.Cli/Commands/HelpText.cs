@@ -22,9 +22,11 @@ internal static class HelpText
           merge DESIGN [FOLDER ...] [--out FILE]      join run folders (shards) into one training set
           fit TRAINING [options]                      fit a PCA + Gaussian-process emulator, validate it on held-out points
           check EMULATOR [options]                    compare an emulator with fresh direct runs in its box
+          serve NAME=EMULATOR ... [options]           serve emulators to samplers over gRPC (protos/sibyl/v1)
+          ask NAME [name=value ...] [options]         ask a running server for one point, CSV on stdout
 
         sibyl compute --help lists every parameter with its default, range and unit;
-        sibyl plan|run|merge|fit|check --help describe their options. Grid specs: training-grids/README.md.
+        sibyl plan|run|merge|fit|check|serve|ask --help describe their options. Grid specs: training-grids/README.md.
         """;
 
     public const string Plan = """
@@ -181,5 +183,46 @@ internal static class HelpText
           --folder DIR   [sibyl-quickstart] work folder
           --threads N    [number of cores] worker threads
           --help         this text
+        """;
+
+    public const string Serve = """
+        usage: sibyl serve NAME=EMULATOR ... [--host H] [--port P] [--max-batch N] [--max-message-bytes N]
+
+        Serves emulator files (from sibyl fit) under the given names over gRPC (HTTP/2 without TLS; the contract
+        is protos/sibyl/v1/emulator.proto), with standard gRPC health checking and server reflection. Prints one
+        line on stdout saying where it listens and each emulator's measured accuracy; logs go to stderr.
+        Ctrl-C or SIGTERM stops it after the calls in flight (at most 5 s).
+
+        options:
+          --host H               [127.0.0.1] address to bind: loopback only by default, as the server has no
+                                 authentication; 0.0.0.0 exposes it to the network
+          --port P               [50051] TCP port; 0 picks a free one (printed)
+          --max-batch N          [10000] most points in one batch call (more: RESOURCE_EXHAUSTED)
+          --max-message-bytes N  [67108864] largest request or reply, bytes
+          --max-k N              [10000] most requested k values per point (more: INVALID_ARGUMENT)
+          --verbose              log every refused request on stderr
+          --help                 this text
+        """;
+
+    public const string Ask = """
+        usage: sibyl ask NAME [name=value ...] [--server URL] [--z Z] [--k K1,K2,...] [options]
+
+        Asks a running sibyl serve for one point of emulator NAME and writes a CSV (invariant culture,
+        round-trip precision): k, each observable, then with --basis each basis term, with --variance
+        var_<series>, with --gradient d<series>/d<parameter>. name=value sets an input parameter or a nuisance
+        parameter (missing nuisance parameters count as 0). Units: k in h/Mpc, P in (Mpc/h)^3.
+
+        options:
+          --server URL    [http://127.0.0.1:50051] the server
+          --z Z           redshift, for emulators trained at fixed redshifts (one of them)
+          --k K1,K2,...   wavenumbers inside the emulator's k range, h/Mpc [the emulator's grid]
+          --basis         also every basis term
+          --variance      also the emulator's predictive variances
+          --gradient      also d/d(parameter) of every series
+          --extrapolate   allow a point slightly outside the box (warned on stderr)
+          --timeout S     [30] seconds before giving up
+          --help          this text
+
+        exit codes: 0 done, 2 refused (the message names the parameter and its range), 1 server unreachable
         """;
 }
