@@ -13,7 +13,7 @@ internal static class HelpText
         usage: sibyl <command> [arguments]
 
         commands:
-          quickstart [--folder DIR]                   the whole job on a built-in grid: plan, run, fit, check
+          quickstart [--folder DIR]                   the whole job on a built-in grid: plan, run, fit, check, serve
           compute linear [name=value ...] [options]   linear spectrum P_lin and its no-wiggle partner P_nw
           compute matter [name=value ...] [options]   one-loop real-space matter spectrum, IR-resummed
           compute galaxy [name=value ...] [options]   one-loop redshift-space galaxy multipoles P0, P2, P4
@@ -171,17 +171,20 @@ internal static class HelpText
         """;
 
     public const string Quickstart = """
-        usage: sibyl quickstart [--folder DIR] [--threads N]
+        usage: sibyl quickstart [--folder DIR] [--threads N] [--port P] [--no-serve]
 
         The whole job on the built-in grid (training-grids/quickstart.json: the one-loop matter spectrum over
         an invented nDGP box of omega_cdm, ln10As, z and Omega_rc): plans a Latin-hypercube design, computes
         it on all cores, merges, fits a PCA + Gaussian-process emulator, validates it on held-out points and on
-        fresh direct runs, and prints the measured accuracy. A few minutes on 2 cores. Everything stays in
-        DIR; a second run reuses what is already built.
+        fresh direct runs, prints the measured accuracy, then serves the emulator over gRPC on loopback as
+        'quickstart' until Ctrl-C. A few minutes on 2 cores. Everything stays in DIR; a second run reuses
+        what is already built.
 
         options:
           --folder DIR   [sibyl-quickstart] work folder
           --threads N    [number of cores] worker threads
+          --port P       [50051] port of the server (0: a free one, printed)
+          --no-serve     stop after the check instead of serving
           --help         this text
         """;
 

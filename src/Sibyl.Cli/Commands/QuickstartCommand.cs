@@ -21,6 +21,8 @@ internal static class QuickstartCommand
 {
     private const string GridResource = "quickstart.json";
 
+    private static readonly IReadOnlySet<string> Flags = new HashSet<string>(StringComparer.Ordinal) { "no-serve" };
+
     public static int Run(string[] args, TextWriter stdout, TextWriter stderr, bool interactive)
     {
         if (args.Contains("--help"))
@@ -29,9 +31,11 @@ internal static class QuickstartCommand
             return 0;
         }
 
-        var arguments = new CommandArguments(args, new HashSet<string>(StringComparer.Ordinal));
+        var arguments = new CommandArguments(args, Flags);
         string folder = arguments.Option("folder") ?? "sibyl-quickstart";
         int threads = arguments.IntegerOption("threads", Environment.ProcessorCount, 1, 4096);
+        bool serve = !arguments.HasFlag("no-serve");
+        int port = arguments.IntegerOption("port", Sibyl.Server.SibylServerOptions.DefaultPort, 0, 65535);
         arguments.RejectUnused("see sibyl quickstart --help");
         Directory.CreateDirectory(folder);
         stderr = TextWriter.Synchronized(stderr);
@@ -41,9 +45,7 @@ internal static class QuickstartCommand
         var design = Plan(spec, Path.Combine(folder, "quickstart.design"), stderr);
         string runFolder = Path.Combine(folder, "quickstart.run");
         stderr.WriteLine($"quickstart 2/5 run: {design.Count} points of the one-loop matter spectrum on {threads} threads into {runFolder}");
-        var display = new ProgressDisplay(stderr, interactive);
-        var summary = new TrainingRun(design, runFolder, ShardSelection.All, threads, retryFailed: false).Execute(display, line => stderr.WriteLine($"quickstart: {line}"), CancellationToken.None);
-        display.Close();
+        var summary = Compute(design, runFolder, threads, stderr, interactive);
         stderr.WriteLine($"quickstart 2/5 run: {summary.ChunksReused} of {summary.ChunksOwned} chunks reused, {summary.PointsComputed} points computed, {summary.Failures.Count} failed");
 
         var set = Merge(design, runFolder, Path.Combine(folder, "quickstart.training"), stderr);
@@ -55,14 +57,22 @@ internal static class QuickstartCommand
         AccuracyOutput.Write(check, "quickstart emulator against fresh direct runs", Path.Combine(folder, "quickstart-check"), stderr);
         AccuracyOutput.Summarize(emulator.Accuracy, "quickstart", stderr);
         AccuracyOutput.Summarize(check, "quickstart", stderr);
-        stderr.WriteLine(string.Create(CultureInfo.InvariantCulture, $"quickstart: done in {clock.Elapsed.TotalSeconds:F0} s; emulator {Path.Combine(folder, "quickstart.emulator")}, valid only inside its box:"));
+        stderr.WriteLine(string.Create(CultureInfo.InvariantCulture, $"quickstart: built and checked in {clock.Elapsed.TotalSeconds:F0} s; emulator {Path.Combine(folder, "quickstart.emulator")}, valid only inside its box:"));
         for (int q = 0; q < emulator.ParameterNames.Count; q++)
         {
             stderr.WriteLine(string.Create(CultureInfo.InvariantCulture, $"quickstart:   {emulator.ParameterNames[q]} in [{emulator.Min[q]:G}, {emulator.Max[q]:G}]"));
         }
 
-        stdout.WriteLine(Path.Combine(folder, "quickstart.emulator"));
-        return 0;
+        string emulatorPath = Path.Combine(folder, "quickstart.emulator");
+        if (!serve)
+        {
+            stdout.WriteLine(emulatorPath);
+            return 0;
+        }
+
+        string server = port == Sibyl.Server.SibylServerOptions.DefaultPort ? "" : " --server http://ADDRESS:PORT (printed below)";
+        stderr.WriteLine($"quickstart: serving it as 'quickstart' over gRPC; ask it with: sibyl ask quickstart omega_cdm=0.12 ln10As=3.0 z=0.5 Omega_rc=0.1 cs2=1{server}; Ctrl-C stops");
+        return ServeCommand.Run([$"quickstart={emulatorPath}", "--port", port.ToString(CultureInfo.InvariantCulture)], stdout, stderr);
     }
 
     private static string BuiltInGrid()
@@ -96,6 +106,27 @@ internal static class QuickstartCommand
         design.Save(path);
         stderr.WriteLine($"quickstart 1/5 plan: {spec.TrainingPoints} training + {spec.HeldOutPoints} held-out points over {string.Join(", ", spec.Varied.Select(v => v.Name))} -> {path}");
         return design;
+    }
+
+    private static RunSummary Compute(TrainingDesign design, string runFolder, int threads, TextWriter stderr, bool interactive)
+    {
+        var display = new ProgressDisplay(stderr, interactive);
+        try
+        {
+            return new TrainingRun(design, runFolder, ShardSelection.All, threads, retryFailed: false).Execute(display, line => stderr.WriteLine($"quickstart: {line}"), CancellationToken.None);
+        }
+        catch (RunConflictException)
+        {
+            // The work folder is the quickstart's own: results of an older build are simply recomputed.
+            display.Close();
+            stderr.WriteLine($"quickstart: {runFolder} holds results of another build of Sibyl; computing them again");
+            Directory.Delete(runFolder, recursive: true);
+            return new TrainingRun(design, runFolder, ShardSelection.All, threads, retryFailed: false).Execute(display, line => stderr.WriteLine($"quickstart: {line}"), CancellationToken.None);
+        }
+        finally
+        {
+            display.Close();
+        }
     }
 
     private static TrainingSet Merge(TrainingDesign design, string runFolder, string path, TextWriter stderr)
