@@ -141,8 +141,9 @@ internal static class HelpText
           --out EMULATOR       [TRAINING with .emulator] the emulator file
           --report PREFIX      [EMULATOR without extension, then -heldout] report files PREFIX.txt, PREFIX.png
           --kernel K           [matern52] matern52 or se (squared exponential); ARD length scales
-          --separate N         [4] leading components of each term with a Gaussian process of their own;
-                               the rest share one (0: one process per term, fastest to predict)
+          --separate N         [1] leading components of each term with a Gaussian process of their own;
+                               the rest share one (0: one process per term, fastest to predict; more:
+                               slower, slightly more accurate)
           --trend N            [2] degree of the polynomial trend (0, 1, 2)
           --pca-tolerance E    [1e-4] largest reconstruction error (ln units, or RMS units for signed terms)
           --hyper-points N     [400] training points used to optimise hyperparameters (all are conditioned on)

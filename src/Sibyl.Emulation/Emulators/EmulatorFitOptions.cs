@@ -10,10 +10,12 @@ public sealed record EmulatorFitOptions
 
     /// <summary>
     /// Leading principal components of each block that get a Gaussian process of their own; the remaining ones share
-    /// one process (one kernel, one Cholesky factor). The leading components carry nearly all the variance and
-    /// deserve their own length scales; sharing the rest keeps prediction to a few kernel vectors per term.
+    /// one process (one kernel, one Cholesky factor). The leading component carries nearly all the variance and
+    /// deserves its own length scales; sharing the rest keeps prediction to two kernel vectors per term. Measured on
+    /// the 7-parameter nDGP matter box at 1000 points (99th-percentile held-out error of P_tree_plus_loop): 0 gives
+    /// 0.080 %, 1 gives 0.034 %, 4 gives 0.026 % at 2.5 times the prediction cost of 1.
     /// </summary>
-    public int SeparateComponents { get; init; } = 4;
+    public int SeparateComponents { get; init; } = 1;
 
     /// <summary>Degree of the polynomial trend (0, 1 or 2).</summary>
     public int TrendDegree { get; init; } = 2;
