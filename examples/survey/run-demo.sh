@@ -1,7 +1,8 @@
 #!/usr/bin/env bash
 # The whole survey demo end to end, on an INVENTED survey (not any real survey): a training set over the demo's box
 # (plan, run, merge), an emulator fitted with options sized for 2 cores, synthetic data from the direct calculation,
-# an ensemble-sampler chain on the emulator, a short chain on the direct calculation for the wall-clock comparison,
+# an ensemble-sampler chain on the emulator in process and through the gRPC server (sibyl serve), a short chain on
+# the direct calculation for the wall-clock comparison,
 # and the emulator-vs-direct likelihood comparison at the chain's points.
 #
 # usage: examples/survey/run-demo.sh [--quick] [--out FOLDER]
@@ -22,9 +23,9 @@ while [[ $# -gt 0 ]]; do
 done
 
 if [[ $quick == 1 ]]; then
-  spec="$here/survey-emulator-quick.json"; steps=300; direct_steps=5; points=200
+  spec="$here/survey-emulator-quick.json"; steps=300; server_steps=100; direct_steps=5; points=200
 else
-  spec="$here/survey-emulator.json"; steps=3000; direct_steps=20; points=500
+  spec="$here/survey-emulator.json"; steps=3000; server_steps=1000; direct_steps=20; points=500
 fi
 scenario="$here/scenario.json"
 mkdir -p "$out"
@@ -52,10 +53,22 @@ log "synthetic data from the direct calculation at the hidden parameters"
 log "chain on the emulator ($steps steps)"
 "$demo" fit --scenario "$scenario" --data data --emulator survey.emulator --out chain --steps "$steps"
 
+log "the same sampler through the gRPC server ($server_steps steps): sibyl serve on a free loopback port"
+"$sibyl" serve survey=survey.emulator --port 0 > serve.out 2> serve.log &
+server=$!
+trap 'kill "$server" 2> /dev/null || true' EXIT
+for _ in $(seq 1 120); do grep -q "listening on" serve.out && break; sleep 0.5; done
+address="$(grep -o 'http://[0-9.]*:[0-9]*' serve.out | head -n 1)"
+[[ -n "$address" ]] || { cat serve.log >&2; echo "run-demo.sh: the server did not start" >&2; exit 1; }
+"$demo" fit --scenario "$scenario" --data data --server "$address" --served-name survey --out chain-server --steps "$server_steps"
+kill -TERM "$server"
+wait "$server"
+trap - EXIT
+
 log "the same sampler on the direct calculation, $direct_steps steps only, for the wall-clock comparison"
 "$demo" fit --scenario "$scenario" --data data --direct "$spec" --out chain-direct --steps "$direct_steps" --burn-in 0 | tail -n 1
 
 log "emulator vs direct likelihoods at $points chain points"
 "$demo" compare --scenario "$scenario" --data data --chain chain/chain.csv --emulator survey.emulator --out compare --points "$points"
 
-log "done: $out (data/, chain/, chain-direct/, compare/, survey-heldout.txt)"
+log "done: $out (data/, chain/, chain-server/, chain-direct/, compare/, survey-heldout.txt)"

@@ -17,7 +17,7 @@ public static class FitCommand
 {
     /// <summary>Usage text.</summary>
     public const string Help = """
-        usage: survey-demo fit --scenario FILE --data FOLDER (--emulator FILE | --direct GRID_SPEC) --out FOLDER
+        usage: survey-demo fit --scenario FILE --data FOLDER (--emulator FILE | --server URL [--served-name NAME] | --direct GRID_SPEC) --out FOLDER
                                [--walkers N] [--steps N] [--burn-in N] [--seed N]
 
         Samples the cosmological parameters of the theory's box and the scenario's sampled nuisance parameters
@@ -40,7 +40,7 @@ public static class FitCommand
     /// <summary>Runs the command; returns the exit code.</summary>
     public static int Run(IReadOnlyList<string> args)
     {
-        var options = new CommandOptions(args, ["--scenario", "--data", "--emulator", "--direct", "--out", "--walkers", "--steps", "--burn-in", "--seed"], []);
+        var options = new CommandOptions(args, ["--scenario", "--data", "--emulator", "--direct", "--server", "--served-name", "--out", "--walkers", "--steps", "--burn-in", "--seed"], []);
         var scenario = SurveyScenario.Load(options.Required("--scenario"));
         string dataFolder = options.Required("--data"), folder = options.Required("--out");
         Directory.CreateDirectory(folder);
