@@ -23,9 +23,9 @@ while [[ $# -gt 0 ]]; do
 done
 
 if [[ $quick == 1 ]]; then
-  spec="$here/survey-emulator-quick.json"; steps=300; server_steps=100; direct_steps=5; points=200
+  spec="$here/survey-emulator-quick.json"; steps=300; server_steps=100; python_steps=150; direct_steps=5; points=200
 else
-  spec="$here/survey-emulator.json"; steps=3000; server_steps=1000; direct_steps=20; points=500
+  spec="$here/survey-emulator.json"; steps=3000; server_steps=1000; python_steps=600; direct_steps=20; points=500
 fi
 scenario="$here/scenario.json"
 mkdir -p "$out"
@@ -61,6 +61,15 @@ for _ in $(seq 1 120); do grep -q "listening on" serve.out && break; sleep 0.5; 
 address="$(grep -o 'http://[0-9.]*:[0-9]*' serve.out | head -n 1)"
 [[ -n "$address" ]] || { cat serve.log >&2; echo "run-demo.sh: the server did not start" >&2; exit 1; }
 "$demo" fit --scenario "$scenario" --data data --server "$address" --served-name survey --out chain-server --steps "$server_steps"
+# The Python sampler needs Debian's python3-grpcio and python3-protobuf, protoc and its gRPC plugin (as .ci/run installs).
+if /usr/bin/python3 -c "import grpc" 2> /dev/null && command -v protoc > /dev/null && command -v grpc_python_plugin > /dev/null; then
+  log "the Python sampler (examples/python/survey_sampler.py) through the same server"
+  "$root/examples/python/generate.sh" "$out/stubs" > /dev/null
+  PYTHONPATH="$out/stubs" /usr/bin/python3 "$root/examples/python/survey_sampler.py" --server "${address#http://}" --emulator survey \
+    --scenario "$scenario" --data data --steps "$python_steps" | tee python-sampler.csv
+else
+  log "skipping the Python sampler: it needs python3-grpcio, python3-protobuf, protoc and grpc_python_plugin"
+fi
 kill -TERM "$server"
 wait "$server"
 trap - EXIT
