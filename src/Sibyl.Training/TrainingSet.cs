@@ -68,13 +68,17 @@ public sealed class TrainingSet
     /// <summary>Redshifts of point <paramref name="index"/>.</summary>
     public double[] Redshifts(int index) => GridPoint.Redshifts(Spec, Parameters(index));
 
+    /// <summary>Every value of point <paramref name="index"/>: redshift-major, then term-major over k.</summary>
+    /// <exception cref="InvalidOperationException">The point failed.</exception>
+    public ReadOnlySpan<double> Values(int index) =>
+        _contract.Values[index] ?? throw new InvalidOperationException($"point {index} failed: {_contract.Errors[index]}");
+
     /// <summary>The basis spectra of point <paramref name="index"/> at its redshift number <paramref name="redshift"/>.</summary>
     /// <exception cref="InvalidOperationException">The point failed.</exception>
     public BasisSpectra Spectra(int index, int redshift)
     {
-        var values = _contract.Values[index] ?? throw new InvalidOperationException($"point {index} failed: {_contract.Errors[index]}");
         int block = Layout.Terms.Count * _k.Length;
-        return new BasisSpectra(Layout, _k, values.AsSpan(redshift * block, block).ToArray());
+        return new BasisSpectra(Layout, _k, Values(index).Slice(redshift * block, block).ToArray());
     }
 
     /// <summary>Writes the training set atomically.</summary>

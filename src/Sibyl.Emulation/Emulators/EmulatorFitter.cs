@@ -79,8 +79,7 @@ public static class EmulatorFitter
             InputWarps = [.. warps.Select(w => (int)w)],
         };
         var emulator = new SpectrumEmulator(contract, "new emulator");
-        contract.Accuracy = Validate(emulator, set, heldOut).Contract;
-        return new SpectrumEmulator(contract, "new emulator");
+        return emulator.WithAccuracy(Validate(emulator, set, heldOut));
     }
 
     /// <summary>Compares the emulator with the training set's held-out points at every slice.</summary>
@@ -90,37 +89,8 @@ public static class EmulatorFitter
         ArgumentNullException.ThrowIfNull(set);
         ArgumentNullException.ThrowIfNull(points);
         var predictor = emulator.CreatePredictor();
-        var comparisons = new List<Comparison>();
-        int terms = set.Layout.Terms.Count, nk = set.K.Length;
-        foreach (int i in points)
-        {
-            var parameters = set.Parameters(i);
-            for (int s = 0; s < emulator.SliceCount; s++)
-            {
-                var emulated = new double[terms * nk];
-                predictor.Predict(parameters, s, emulated, [], []);
-                var direct = set.Spectra(i, s);
-                var values = new double[terms * nk];
-                for (int t = 0; t < terms; t++)
-                {
-                    direct.Term(t).CopyTo(values.AsSpan(t * nk, nk));
-                }
-
-                comparisons.Add(new Comparison(Label(emulator, i, parameters, s), emulated, values));
-            }
-        }
-
+        var comparisons = points.SelectMany(i => Comparison.AtEverySlice(emulator, predictor, i, set.Parameters(i), set.Values(i))).ToList();
         return AccuracyReport.Measure("held-out", [.. set.Layout.Terms.Select(x => x.Name)], set.K.ToArray(), comparisons);
-    }
-
-    /// <summary>How a point is named in reports.</summary>
-    public static string Label(SpectrumEmulator emulator, int index, IReadOnlyList<double> parameters, int slice)
-    {
-        ArgumentNullException.ThrowIfNull(emulator);
-        ArgumentNullException.ThrowIfNull(parameters);
-        string values = string.Join(", ", emulator.ParameterNames.Select((name, q) => string.Create(CultureInfo.InvariantCulture, $"{name}={parameters[q]:G5}")));
-        string z = emulator.Redshifts.Count > 0 ? string.Create(CultureInfo.InvariantCulture, $", z={emulator.Redshifts[slice]:G}") : "";
-        return $"point {index} ({values}{z})";
     }
 
     private static (BlockContract, Matrix<double>) Compress(TrainingSet set, int[] training, int slice, int term, int nk, EmulatorFitOptions options)

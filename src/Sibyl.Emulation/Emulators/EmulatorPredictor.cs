@@ -16,7 +16,7 @@ public sealed class EmulatorPredictor
     private readonly GaussianProcessPredictor[] _processes;
     private readonly double[][] _mean, _variance, _gradient;
     private readonly double[][] _coefficients, _coefficientVariance, _coefficientGradient;
-    private readonly double[] _unit, _features, _values, _inverseWidth, _warpSlope;
+    private readonly double[] _unit, _features, _values, _min, _inverseWidth, _warpSlope;
     private readonly int[][] _processesOfSlice;
     private readonly BasisSpectra _spectra;
     private readonly int _d, _nk, _terms;
@@ -38,6 +38,7 @@ public sealed class EmulatorPredictor
         _warpSlope = new double[_d];
         _features = new double[_nk];
         _values = new double[_terms * _nk];
+        _min = [.. emulator.Min];
         _inverseWidth = [.. Enumerable.Range(0, _d).Select(q => 1.0 / (emulator.Max[q] - emulator.Min[q]))];
         _processesOfSlice = [.. Enumerable.Range(0, emulator.SliceCount).Select(s =>
             Enumerable.Range(0, emulator.Processes.Length).Where(p => emulator.Contract.Processes[p].OutputBlocks[0] / _terms == s).ToArray())];
@@ -99,7 +100,7 @@ public sealed class EmulatorPredictor
         bool wantVariance = !variance.IsEmpty, wantGradient = !gradient.IsEmpty;
         for (int q = 0; q < _d; q++)
         {
-            (_unit[q], _warpSlope[q]) = SpectrumEmulator.Warp(_emulator.Warps[q], (parameters[q] - _emulator.Min[q]) * _inverseWidth[q]);
+            (_unit[q], _warpSlope[q]) = SpectrumEmulator.Warp(_emulator.Warps[q], (parameters[q] - _min[q]) * _inverseWidth[q]);
         }
 
         var contract = _emulator.Contract;

@@ -92,6 +92,21 @@ public sealed class SpectrumEmulator
         Warps = [.. contract.InputWarps.Select(w => Enum.IsDefined((InputWarp)w) ? (InputWarp)w : throw new CorruptFileException(source, "unknown input warp"))];
     }
 
+    /// <summary>The same fitted parts with another accuracy record (the fitter measures it on the emulator itself).</summary>
+    private SpectrumEmulator(SpectrumEmulator fitted, EmulatorContract contract, AccuracyReport accuracy)
+    {
+        _contract = contract;
+        Spec = fitted.Spec;
+        SliceCount = fitted.SliceCount;
+        Layout = fitted.Layout;
+        Blocks = fitted.Blocks;
+        Transforms = fitted.Transforms;
+        Warps = fitted.Warps;
+        Processes = fitted.Processes;
+        Trends = fitted.Trends;
+        Accuracy = accuracy;
+    }
+
     /// <summary>The grid spec of the training set.</summary>
     public GridSpec Spec { get; }
 
@@ -159,6 +174,17 @@ public sealed class SpectrumEmulator
         // u = 1e-12 (where it is 5e5 per unit of u) rather than infinite at the edge.
         double root = Math.Sqrt(Math.Max(Math.Abs(u), 1e-12));
         return (Math.CopySign(Math.Sqrt(Math.Abs(u)), u), 0.5 / root);
+    }
+
+    /// <summary>
+    /// This emulator carrying <paramref name="accuracy"/> as its measured accuracy, sharing every fitted part (the
+    /// Cholesky factors alone are n² numbers per process). For the fitter only, before the first instance is handed out:
+    /// both instances share the stored form, whose accuracy record this replaces.
+    /// </summary>
+    internal SpectrumEmulator WithAccuracy(AccuracyReport accuracy)
+    {
+        _contract.Accuracy = accuracy.Contract;
+        return new SpectrumEmulator(this, _contract, accuracy);
     }
 
     /// <summary>A predictor with its own buffers; make one per thread.</summary>

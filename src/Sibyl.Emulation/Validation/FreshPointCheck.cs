@@ -22,7 +22,7 @@ public static class FreshPointCheck
     /// <param name="points">Fresh points, at least 2.</param>
     /// <param name="seed">Seed of their Latin hypercube.</param>
     /// <param name="threads">Threads for the direct calculation.</param>
-    /// <param name="progress">Receives (points done, failures so far) after each point.</param>
+    /// <param name="progress">Receives the number of points done after each point.</param>
     /// <param name="failures">Receives each failed point's message.</param>
     /// <exception cref="ArgumentException">Every point failed, or there are fewer than 2.</exception>
     public static AccuracyReport Run(SpectrumEmulator emulator, int points, ulong seed, int threads, Action<int>? progress, Action<string>? failures)
@@ -32,7 +32,6 @@ public static class FreshPointCheck
         var spec = emulator.Spec with { TrainingPoints = points, HeldOutPoints = 0, Seed = seed };
         var design = TrainingDesign.Create(spec);
         var calculator = new PointCalculator(design);
-        int size = emulator.Layout.Terms.Count * emulator.K.Count;
         var comparisons = new Comparison?[points * emulator.SliceCount];
         int done = 0;
         using var predictors = new ThreadLocal<EmulatorPredictor>(emulator.CreatePredictor);
@@ -40,14 +39,8 @@ public static class FreshPointCheck
         {
             try
             {
-                var direct = calculator.Compute(i, CancellationToken.None);
-                var parameters = design.Point(i);
-                for (int s = 0; s < emulator.SliceCount; s++)
-                {
-                    var emulated = new double[size];
-                    predictors.Value!.Predict(parameters, s, emulated, [], []);
-                    comparisons[(i * emulator.SliceCount) + s] = new Comparison(EmulatorFitter.Label(emulator, i, parameters, s), emulated, direct.AsSpan(s * size, size).ToArray());
-                }
+                Comparison.AtEverySlice(emulator, predictors.Value!, i, design.Point(i), calculator.Compute(i, CancellationToken.None))
+                    .CopyTo(comparisons, i * emulator.SliceCount);
             }
             catch (Exception e) when (e is ArgumentException or ArithmeticException or InvalidOperationException or Training.Linear.ExternalLinearException)
             {

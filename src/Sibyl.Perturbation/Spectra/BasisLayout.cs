@@ -54,6 +54,37 @@ public sealed class BasisLayout
         return c;
     }
 
+    /// <summary>
+    /// destination = Σ_t coefficients[t] × row t over the terms of <paramref name="observable"/>, in term order, terms
+    /// with a zero coefficient skipped. Rows are term-major, <paramref name="rowLength"/> numbers each: values over k,
+    /// or anything laid out per term the same way (variances with squared coefficients, gradients over k × parameters).
+    /// The one assembly every consumer shares, so an observable is the same to the last bit wherever it is built.
+    /// </summary>
+    /// <exception cref="ArgumentException">Wrong number of coefficients, rows or destination length.</exception>
+    public void Combine(ReadOnlySpan<double> rows, int rowLength, ReadOnlySpan<double> coefficients, int observable, Span<double> destination)
+    {
+        if (coefficients.Length != Terms.Count || rows.Length < Terms.Count * rowLength || destination.Length != rowLength)
+        {
+            throw new ArgumentException($"need {Terms.Count} coefficients, {Terms.Count} rows of {rowLength} and a destination of {rowLength}");
+        }
+
+        destination.Clear();
+        for (int t = 0; t < Terms.Count; t++)
+        {
+            double c = coefficients[t];
+            if (Terms[t].Observable != observable || c == 0.0)
+            {
+                continue;
+            }
+
+            var row = rows.Slice(t * rowLength, rowLength);
+            for (int i = 0; i < rowLength; i++)
+            {
+                destination[i] += c * row[i];
+            }
+        }
+    }
+
     /// <summary>Index of a nuisance parameter by name.</summary>
     /// <exception cref="KeyNotFoundException">Unknown name.</exception>
     public int NuisanceIndex(string name)

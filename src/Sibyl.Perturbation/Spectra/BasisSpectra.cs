@@ -60,25 +60,13 @@ public sealed class BasisSpectra
             throw new ArgumentException($"need {Layout.Nuisance.Count} nuisance values and {_k.Length} outputs");
         }
 
-        destination.Clear();
-        for (int t = 0; t < Layout.Terms.Count; t++)
+        // A few dozen terms at most, so the coefficients fit on the stack.
+        Span<double> coefficients = stackalloc double[Layout.Terms.Count];
+        for (int t = 0; t < coefficients.Length; t++)
         {
-            if (Layout.Terms[t].Observable != observable)
-            {
-                continue;
-            }
-
-            double c = Layout.Coefficient(t, nuisance);
-            if (c == 0.0)
-            {
-                continue;
-            }
-
-            var row = Term(t);
-            for (int i = 0; i < row.Length; i++)
-            {
-                destination[i] += c * row[i];
-            }
+            coefficients[t] = Layout.Terms[t].Observable == observable ? Layout.Coefficient(t, nuisance) : 0.0;
         }
+
+        Layout.Combine(_terms, _k.Length, coefficients, observable, destination);
     }
 }

@@ -15,6 +15,7 @@ internal sealed class PredictionWorkspace
         Parameters = new double[d];
         Nuisance = new double[emulator.Layout.Nuisance.Count];
         Coefficients = new double[terms];
+        SquaredCoefficients = new double[terms];
         Values = new double[terms * nk];
         Variance = new double[terms * nk];
         Gradient = new double[terms * nk * d];
@@ -33,6 +34,9 @@ internal sealed class PredictionWorkspace
 
     /// <summary>Each term's coefficient for the request's nuisance values.</summary>
     public double[] Coefficients { get; }
+
+    /// <summary>Their squares, for the variances of observables.</summary>
+    public double[] SquaredCoefficients { get; }
 
     /// <summary>The emulator's output on its own grid: terms × nk, and the variance and gradient in its layouts.</summary>
     public double[] Values { get; }

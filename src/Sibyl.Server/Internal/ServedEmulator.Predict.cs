@@ -43,6 +43,7 @@ internal sealed partial class ServedEmulator
         for (int t = 0; t < terms; t++)
         {
             w.Coefficients[t] = layout.Coefficient(t, w.Nuisance);
+            w.SquaredCoefficients[t] = w.Coefficients[t] * w.Coefficients[t];
         }
 
         var reply = new PredictReply { Extrapolated = !inside };
@@ -88,69 +89,25 @@ internal sealed partial class ServedEmulator
         return reply;
     }
 
-    /// <summary>
-    /// Σ coefficient × term over the observable's terms, in term order and skipping zero coefficients exactly as
-    /// <see cref="Perturbation.Spectra.BasisSpectra.Assemble"/> does, so that the result equals the in-process value bit for bit.
-    /// </summary>
+    /// <summary>One observable and, on request, its variance (Σ c² var, the terms' processes being independent) and gradient, assembled by <see cref="Perturbation.Spectra.BasisLayout.Combine"/> as in process.</summary>
     private Series Observable(PredictionWorkspace w, int observable, int count, double[] values, double[]? variances, double[]? gradients)
     {
-        var terms = Emulator.Layout.Terms;
+        var layout = Emulator.Layout;
         int d = Emulator.ParameterNames.Count;
         var series = new Series { Name = _observables[observable] };
         var sum = w.Column.AsSpan(0, count);
-        sum.Clear();
-        for (int t = 0; t < terms.Count; t++)
-        {
-            double c = w.Coefficients[t];
-            if (terms[t].Observable != observable || c == 0.0)
-            {
-                continue;
-            }
-
-            var row = values.AsSpan(t * count, count);
-            for (int i = 0; i < count; i++)
-            {
-                sum[i] += c * row[i];
-            }
-        }
-
+        layout.Combine(values, count, w.Coefficients, observable, sum);
         Append(series.Values, sum);
         if (variances is not null)
         {
-            sum.Clear();
-            for (int t = 0; t < terms.Count; t++)
-            {
-                double c = w.Coefficients[t];
-                if (terms[t].Observable == observable && c != 0.0)
-                {
-                    var row = variances.AsSpan(t * count, count);
-                    for (int i = 0; i < count; i++)
-                    {
-                        sum[i] += c * c * row[i];
-                    }
-                }
-            }
-
+            layout.Combine(variances, count, w.SquaredCoefficients, observable, sum);
             Append(series.Variance, sum);
         }
 
         if (gradients is not null)
         {
             var total = w.GradientColumn.AsSpan(0, count * d);
-            total.Clear();
-            for (int t = 0; t < terms.Count; t++)
-            {
-                double c = w.Coefficients[t];
-                if (terms[t].Observable == observable && c != 0.0)
-                {
-                    var block = gradients.AsSpan(t * count * d, count * d);
-                    for (int i = 0; i < block.Length; i++)
-                    {
-                        total[i] += c * block[i];
-                    }
-                }
-            }
-
+            layout.Combine(gradients, count * d, w.Coefficients, observable, total);
             Append(series.Gradient, total);
         }
 
