@@ -48,6 +48,18 @@ public sealed record CosmologyParameters
     /// <summary>CMB temperature in K.</summary>
     public double CmbTemperature { get; init; } = 2.7255;
 
+    /// <summary>
+    /// Effective number of massless neutrino species; 3.046 is the standard-model value with non-instantaneous
+    /// decoupling (Mangano et al. 2005, Nucl. Phys. B 729, 221). Used by the Boltzmann solver only.
+    /// </summary>
+    public double NEff { get; init; } = 3.046;
+
+    /// <summary>
+    /// Primordial helium mass fraction Y_He; 0.2454 is the big-bang-nucleosynthesis value for ω_b ≈ 0.0224
+    /// (Planck 2018 VI, from memory). Used by the Boltzmann solver only.
+    /// </summary>
+    public double HeliumFraction { get; init; } = 0.2454;
+
     /// <summary>Ω_m = (ω_b + ω_cdm)/h² (no massive neutrinos).</summary>
     public double OmegaMatter => (OmegaBaryon + OmegaCdm) / (H * H);
 }

@@ -1,0 +1,146 @@
+using Sibyl.Cosmology.Parameters;
+
+namespace Sibyl.Cosmology.Boltzmann;
+
+/// <summary>
+/// The flat background of the Boltzmann solver: photons, massless neutrinos, baryons, cold dark matter and a
+/// dark-energy fluid with w(a) = w0 + wa (1 − a), radiation included at all times. Lengths are in Mpc and
+/// rates in 1/Mpc (c = 1); the dark-energy density absorbs the radiation so that the universe stays flat.
+/// </summary>
+public sealed class RadiationBackground
+{
+    /// <summary>Speed of light in km/s.</summary>
+    public const double SpeedOfLight = 299792.458;
+
+    /// <summary>
+    /// ω_γ per (T_CMB / 2.7255 K)⁴: ρ_γ = a_rad T⁴ over the critical density for h = 1,
+    /// with a_rad = 7.565723e-16 J m⁻³ K⁻⁴ and ρ_crit c² = 1.878340e-26 h² kg m⁻³ · c² (CODATA 2018).
+    /// </summary>
+    public const double PhotonDensityAt2725 = 2.47282e-5;
+
+    /// <summary>Energy density of one massless neutrino species per photon density: (7/8)(4/11)^{4/3}.</summary>
+    public static readonly double NeutrinoPerPhoton = 7.0 / 8.0 * Math.Pow(4.0 / 11.0, 4.0 / 3.0);
+
+    /// <summary>Builds the background of <paramref name="parameters"/>.</summary>
+    /// <exception cref="ArgumentOutOfRangeException">N_eff is negative or the dark-energy density would be negative.</exception>
+    public RadiationBackground(CosmologyParameters parameters)
+    {
+        ArgumentNullException.ThrowIfNull(parameters);
+        if (!(parameters.NEff >= 0.0 && parameters.NEff <= 10.0))
+        {
+            throw new ArgumentOutOfRangeException(nameof(parameters), parameters.NEff, "N_eff must lie in [0, 10]");
+        }
+
+        double h2 = parameters.H * parameters.H;
+        double t = parameters.CmbTemperature / 2.7255;
+        HubbleToday = parameters.H * 100.0 / SpeedOfLight;
+        OmegaPhoton = PhotonDensityAt2725 * t * t * t * t / h2;
+        OmegaNeutrino = parameters.NEff * NeutrinoPerPhoton * OmegaPhoton;
+        OmegaBaryon = parameters.OmegaBaryon / h2;
+        OmegaCdm = parameters.OmegaCdm / h2;
+        OmegaDarkEnergy = 1.0 - OmegaPhoton - OmegaNeutrino - OmegaBaryon - OmegaCdm;
+        if (!(OmegaDarkEnergy >= 0.0))
+        {
+            throw new ArgumentOutOfRangeException(nameof(parameters), OmegaDarkEnergy, "matter and radiation exceed the critical density");
+        }
+
+        W0 = parameters.W0;
+        Wa = parameters.Wa;
+        CmbTemperature = parameters.CmbTemperature;
+    }
+
+    /// <summary>H0 in 1/Mpc.</summary>
+    public double HubbleToday { get; }
+
+    /// <summary>Ω_γ today.</summary>
+    public double OmegaPhoton { get; }
+
+    /// <summary>Ω_ν today, all massless species together.</summary>
+    public double OmegaNeutrino { get; }
+
+    /// <summary>Ω_b today.</summary>
+    public double OmegaBaryon { get; }
+
+    /// <summary>Ω_cdm today.</summary>
+    public double OmegaCdm { get; }
+
+    /// <summary>Ω_DE today, closing the budget.</summary>
+    public double OmegaDarkEnergy { get; }
+
+    /// <summary>CPL w0.</summary>
+    public double W0 { get; }
+
+    /// <summary>CPL wa.</summary>
+    public double Wa { get; }
+
+    /// <summary>T_CMB today in K.</summary>
+    public double CmbTemperature { get; }
+
+    /// <summary>Ω_γ + Ω_ν today.</summary>
+    public double OmegaRadiation => OmegaPhoton + OmegaNeutrino;
+
+    /// <summary>Ω_b + Ω_cdm today.</summary>
+    public double OmegaMatter => OmegaBaryon + OmegaCdm;
+
+    /// <summary>Fraction of the radiation density in neutrinos, R_ν of Ma &amp; Bertschinger (1995).</summary>
+    public double NeutrinoFraction => OmegaNeutrino / OmegaRadiation;
+
+    /// <summary>Dark-energy density over today's critical density at scale factor <paramref name="a"/>.</summary>
+    public double DarkEnergyDensity(double a) =>
+        OmegaDarkEnergy * Math.Exp(-3.0 * (1.0 + W0 + Wa) * Math.Log(a) - 3.0 * Wa * (1.0 - a));
+
+    /// <summary>Dark-energy equation of state w(a).</summary>
+    public double DarkEnergyEquationOfState(double a) => W0 + Wa * (1.0 - a);
+
+    /// <summary>E²(a) = H²/H0².</summary>
+    public double HubbleSquaredOverToday(double a)
+    {
+        double a2 = a * a;
+        return OmegaRadiation / (a2 * a2) + OmegaMatter / (a2 * a) + DarkEnergyDensity(a);
+    }
+
+    /// <summary>Conformal Hubble rate 𝓗 = a H in 1/Mpc.</summary>
+    public double ConformalHubble(double a) => a * HubbleToday * Math.Sqrt(HubbleSquaredOverToday(a));
+
+    /// <summary>
+    /// d𝓗/dτ in 1/Mpc²: 𝓗' = −(𝓗²/2)(1 + 3 p/ρ) over all components, from the second Friedmann equation.
+    /// </summary>
+    public double ConformalHubbleDerivative(double a)
+    {
+        double a2 = a * a;
+        double radiation = OmegaRadiation / (a2 * a2), matter = OmegaMatter / (a2 * a), darkEnergy = DarkEnergyDensity(a);
+        double total = radiation + matter + darkEnergy;
+        double pressure = radiation / 3.0 + DarkEnergyEquationOfState(a) * darkEnergy;
+        double conformalHubbleSquared = a2 * HubbleToday * HubbleToday * total;
+        return -0.5 * conformalHubbleSquared * (1.0 + 3.0 * pressure / total);
+    }
+
+    /// <summary>
+    /// Conformal time τ(a) = ∫ da / (a² H) in Mpc, integrated in ln a by Simpson's rule from a = 1e-12 with the
+    /// radiation-era value a/(H0 √Ω_r) as its start; <paramref name="stepsPerUnitLnA"/> = 200 gives about 1e-9 relative.
+    /// </summary>
+    public double ConformalTime(double a, int stepsPerUnitLnA = 200)
+    {
+        const double start = 1e-12;
+        if (a <= start)
+        {
+            return a / (HubbleToday * Math.Sqrt(OmegaRadiation));
+        }
+
+        double lnStart = Math.Log(start), lnEnd = Math.Log(a);
+        int steps = 2 * Math.Max(4, (int)Math.Ceiling((lnEnd - lnStart) * stepsPerUnitLnA / 2.0));
+        double step = (lnEnd - lnStart) / steps, sum = 0.0;
+        for (int i = 0; i <= steps; i++)
+        {
+            double x = Math.Exp(lnStart + i * step);
+            double weight = i == 0 || i == steps ? 1.0 : (i % 2 == 1 ? 4.0 : 2.0);
+            sum += weight / ConformalHubble(x);
+        }
+
+        return start / (HubbleToday * Math.Sqrt(OmegaRadiation)) + sum * step / 3.0;
+    }
+
+    /// <summary>(3/2) 𝓗² Ω_i(a) written as 4πG a² ρ_i in 1/Mpc², for component density today <paramref name="omega"/> scaling as a^−<paramref name="power"/>.</summary>
+    public double GravitationalWeight(double omega, int power, double a) =>
+        1.5 * HubbleToday * HubbleToday * omega * Math.Pow(a, 2 - power);
+}
