@@ -1,18 +1,96 @@
+using MathNet.Numerics.Interpolation;
 using Sibyl.Cosmology.Linear;
 using Sibyl.Cosmology.Parameters;
 
 namespace Sibyl.Cosmology.Boltzmann;
 
 /// <summary>
-/// The linear spectrum from the built-in Einstein–Boltzmann solver, normalised by ln10As (or σ8) and split
-/// into wiggle and no-wiggle parts like every other source.
+/// The linear spectrum from the built-in Einstein–Boltzmann solver: P(k) = (2π²/k³) A_s (k/k_p)^{n_s−1} (δ_m/ζ)²
+/// at z = 0, in growth units like every other source, normalised by ln10As (or rescaled to σ8), and split into
+/// wiggle and no-wiggle parts by <see cref="NoWiggleSplit"/>. The solver runs at <see cref="NodeCount"/> wavenumbers;
+/// between them the ratio to the Eisenstein &amp; Hu (1998) spectrum, which is smooth apart from small residual
+/// wiggles, is interpolated by a cubic spline in ln k; above the last node the fit continues with the last ratio.
 /// </summary>
 public static class BoltzmannLinear
 {
+    /// <summary>Largest wavenumber the solver itself runs at, h/Mpc; above it the fit's shape continues.</summary>
+    public const double SolverKMax = 5.0;
+
+    /// <summary>Solver wavenumbers (h/Mpc): 6 per decade below 0.008, every 0.006 through the BAO range, 12 per decade above 0.4.</summary>
+    public static IReadOnlyList<double> Nodes { get; } = BuildNodes();
+
+    /// <summary>Number of solver wavenumbers.</summary>
+    public static int NodeCount => Nodes.Count;
+
     /// <summary>Solves the Boltzmann hierarchy for <paramref name="parameters"/> and returns the linear spectrum in growth units.</summary>
     /// <param name="parameters">Cosmology.</param>
     /// <param name="lcdmGrowthToday">D(a = 1) of the general-relativity counterpart, in the D → a convention.</param>
-    /// <param name="threads">Worker threads for the k modes; 1 inside an already parallel training run.</param>
-    public static LinearSpectrum Compute(CosmologyParameters parameters, double lcdmGrowthToday, int threads = 0) =>
-        throw new NotImplementedException("the Boltzmann solver is being written");
+    /// <param name="threads">Worker threads for the k modes; 0 for all cores, 1 inside an already parallel training run.</param>
+    /// <param name="settings">Accuracy settings; null for the defaults.</param>
+    /// <exception cref="ArithmeticException">A mode failed to integrate.</exception>
+    public static LinearSpectrum Compute(CosmologyParameters parameters, double lcdmGrowthToday, int threads = 0, BoltzmannSettings? settings = null)
+    {
+        ArgumentNullException.ThrowIfNull(parameters);
+        var solver = new TransferSolver(new RadiationBackground(parameters), parameters.HeliumFraction, settings);
+        double h = parameters.H;
+        var nodes = Nodes;
+        var contrast = solver.MatterContrast(nodes.Select(k => k * h).ToArray(), threads);
+
+        // Normalise with A_s = 1e-9 first; ln10As or σ8 fixes the amplitude below.
+        var fit = LinearSpectrumFactory.FromFittingFormula(parameters, lcdmGrowthToday);
+        double pivot = LinearSpectrumFactory.PivotScale, growthSquared = lcdmGrowthToday * lcdmGrowthToday;
+        double scalarAmplitude = parameters.Ln10As is { } lnAs ? Math.Exp(lnAs) * 1e-10 : 1e-9;
+        var lnK = new double[nodes.Count];
+        var lnRatio = new double[nodes.Count];
+        for (int i = 0; i < nodes.Count; i++)
+        {
+            double k = nodes[i] * h;
+            double power = 2.0 * Math.PI * Math.PI / (k * k * k) * scalarAmplitude * Math.Pow(k / pivot, parameters.SpectralIndex - 1.0)
+                           * contrast[i] * contrast[i] * h * h * h / growthSquared;
+            lnK[i] = Math.Log(nodes[i]);
+            lnRatio[i] = Math.Log(power / fit.Shape.Evaluate(nodes[i]));
+        }
+
+        var ratio = CubicSpline.InterpolateNatural(lnK, lnRatio);
+        double lnKFirst = lnK[0], lnKLast = lnK[^1];
+        var shape = LogGridFunction.Sample(
+            k => fit.Shape.Evaluate(k) * Math.Exp(ratio.Interpolate(Math.Clamp(Math.Log(k), lnKFirst, lnKLast))),
+            LinearSpectrumFactory.DefaultKMin,
+            LinearSpectrumFactory.DefaultKMax,
+            LinearSpectrumFactory.GridPoints);
+        if (parameters.Ln10As is null)
+        {
+            double sigma8 = parameters.Sigma8 ?? throw new ArgumentException("either ln10As or sigma8 must be set", nameof(parameters));
+            double variance = TopHat.Variance(shape, 8.0) * growthSquared;
+            shape = shape.Scaled(sigma8 * sigma8 / variance);
+        }
+
+        var eh = new EisensteinHu(parameters.OmegaBaryon, parameters.OmegaCdm, h, parameters.CmbTemperature);
+        double ns = parameters.SpectralIndex;
+        var noWiggle = NoWiggleSplit.Split(shape, k => Math.Pow(k, ns) * Square(eh.NoWiggleTransfer(k * h)));
+        return new LinearSpectrum(shape, noWiggle, solver.Thermal.SoundHorizonAtDrag * h, "Boltzmann solver");
+    }
+
+    private static double[] BuildNodes()
+    {
+        var nodes = new List<double>();
+        for (double lnK = Math.Log(LinearSpectrumFactory.DefaultKMin); lnK < Math.Log(0.008); lnK += Math.Log(10) / 6)
+        {
+            nodes.Add(Math.Exp(lnK));
+        }
+
+        for (double k = 0.008; k < 0.4; k += 0.006)
+        {
+            nodes.Add(k);
+        }
+
+        for (double lnK = Math.Log(0.4); lnK <= Math.Log(SolverKMax) + 1e-9; lnK += Math.Log(10) / 12)
+        {
+            nodes.Add(Math.Exp(lnK));
+        }
+
+        return [.. nodes];
+    }
+
+    private static double Square(double x) => x * x;
 }

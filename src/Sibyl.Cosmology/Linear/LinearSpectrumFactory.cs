@@ -30,7 +30,7 @@ public static class LinearSpectrumFactory
         double h = parameters.H, ns = parameters.SpectralIndex;
         var shape = LogGridFunction.Sample(k => Math.Pow(k, ns) * Square(fit.Transfer(k * h)), DefaultKMin, DefaultKMax, GridPoints);
         double amplitude = Amplitude(parameters, shape, lcdmGrowthToday);
-        shape = Scale(shape, amplitude);
+        shape = shape.Scaled(amplitude);
         var noWiggle = NoWiggleSplit.Split(shape, k => Math.Pow(k, ns) * Square(fit.NoWiggleTransfer(k * h)));
         return new LinearSpectrum(shape, noWiggle, fit.SoundHorizon * h, "Eisenstein & Hu (1998) fit");
     }
@@ -106,17 +106,6 @@ public static class LinearSpectrumFactory
         double sigma8 = p.Sigma8 ?? throw new ArgumentException("either ln10As or sigma8 must be set", nameof(p));
         double variance = TopHat.Variance(shape, 8.0) * lcdmGrowthToday * lcdmGrowthToday;
         return sigma8 * sigma8 / variance;
-    }
-
-    private static LogGridFunction Scale(LogGridFunction f, double factor)
-    {
-        var values = new double[f.Count];
-        for (int i = 0; i < values.Length; i++)
-        {
-            values[i] = f.Values[i] * factor;
-        }
-
-        return new LogGridFunction(f.LnKMin, f.LnStep, values);
     }
 
     private static double Square(double x) => x * x;

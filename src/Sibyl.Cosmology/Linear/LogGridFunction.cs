@@ -96,6 +96,18 @@ public sealed class LogGridFunction
         return Math.Exp(l0 * _logValues[i] + l1 * _logValues[i + 1] + l2 * _logValues[i + 2] + l3 * _logValues[i + 3]);
     }
 
+    /// <summary>This function times <paramref name="factor"/>, on the same grid.</summary>
+    public LogGridFunction Scaled(double factor)
+    {
+        var values = new double[_values.Length];
+        for (int i = 0; i < values.Length; i++)
+        {
+            values[i] = _values[i] * factor;
+        }
+
+        return new LogGridFunction(LnKMin, LnStep, values);
+    }
+
     /// <summary>The grid points k_i, log-spaced from kMin to kMax inclusive.</summary>
     /// <exception cref="ArgumentOutOfRangeException">Bounds not positive and increasing, or fewer than 2 points.</exception>
     public static double[] LogGrid(double kMin, double kMax, int count)

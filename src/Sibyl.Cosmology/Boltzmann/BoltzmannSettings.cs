@@ -1,0 +1,63 @@
+namespace Sibyl.Cosmology.Boltzmann;
+
+/// <summary>
+/// Accuracy knobs of the Boltzmann solver. The defaults keep the matter spectrum within 1e-3 of a run with
+/// halved tolerances and doubled hierarchies for k ≤ 1 h/Mpc (checked by the convergence tests).
+/// </summary>
+public sealed record BoltzmannSettings
+{
+    /// <summary>Highest photon temperature multipole ℓ kept before truncation (Ma &amp; Bertschinger 1995, eq. 65).</summary>
+    public int PhotonMultipoles { get; init; } = 10;
+
+    /// <summary>Highest photon polarisation multipole.</summary>
+    public int PolarizationMultipoles { get; init; } = 8;
+
+    /// <summary>Highest massless-neutrino multipole.</summary>
+    public int NeutrinoMultipoles { get; init; } = 30;
+
+    /// <summary>Relative tolerance per integration step.</summary>
+    public double RelativeTolerance { get; init; } = 1e-5;
+
+    /// <summary>
+    /// Tight coupling holds while τ_c·𝓗 stays below this (τ_c = 1/κ' the photon mean free time) …
+    /// </summary>
+    public double TightCouplingLimit { get; init; } = 0.01;
+
+    /// <summary>
+    /// … and τ_c·k below this. Modes this far inside the horizon are Silk-damped in the photon–baryon fluid
+    /// before the first-order scheme's error, of order (τ_c k)², matters for the matter spectrum.
+    /// </summary>
+    public double TightCouplingWavenumberLimit { get; init; } = 0.1;
+
+    /// <summary>The free-streaming approximation for radiation starts once k·τ exceeds this …</summary>
+    public double StreamingMinKTau { get; init; } = 45.0;
+
+    /// <summary>… and photons have decoupled: κ'/𝓗 below this.</summary>
+    public double StreamingMaxOpacity { get; init; } = 0.05;
+
+    /// <summary>Modes start when k·τ equals this (deep outside the horizon, where the initial series holds).</summary>
+    public double InitialKTau { get; init; } = 0.01;
+
+    /// <summary>Checks every field.</summary>
+    /// <exception cref="ArgumentOutOfRangeException">A field is outside its allowed range.</exception>
+    public void Validate()
+    {
+        Require(PhotonMultipoles >= 4 && PhotonMultipoles <= 200, nameof(PhotonMultipoles), PhotonMultipoles, "[4, 200]");
+        Require(PolarizationMultipoles >= 4 && PolarizationMultipoles <= 200, nameof(PolarizationMultipoles), PolarizationMultipoles, "[4, 200]");
+        Require(NeutrinoMultipoles >= 4 && NeutrinoMultipoles <= 200, nameof(NeutrinoMultipoles), NeutrinoMultipoles, "[4, 200]");
+        Require(RelativeTolerance >= 1e-12 && RelativeTolerance <= 1e-2, nameof(RelativeTolerance), RelativeTolerance, "[1e-12, 1e-2]");
+        Require(TightCouplingLimit > 0 && TightCouplingLimit <= 0.1, nameof(TightCouplingLimit), TightCouplingLimit, "(0, 0.1]");
+        Require(TightCouplingWavenumberLimit > 0 && TightCouplingWavenumberLimit <= 0.5, nameof(TightCouplingWavenumberLimit), TightCouplingWavenumberLimit, "(0, 0.5]");
+        Require(StreamingMinKTau >= 10, nameof(StreamingMinKTau), StreamingMinKTau, "[10, ∞)");
+        Require(StreamingMaxOpacity > 0 && StreamingMaxOpacity <= 1, nameof(StreamingMaxOpacity), StreamingMaxOpacity, "(0, 1]");
+        Require(InitialKTau > 0 && InitialKTau <= 0.1, nameof(InitialKTau), InitialKTau, "(0, 0.1]");
+    }
+
+    private static void Require(bool ok, string name, double value, string range)
+    {
+        if (!ok)
+        {
+            throw new ArgumentOutOfRangeException(name, value, $"{name} must lie in {range}");
+        }
+    }
+}
