@@ -1,0 +1,108 @@
+using Sibyl.Cosmology.Background;
+using Sibyl.Cosmology.Boltzmann;
+using Sibyl.Cosmology.Boltzmann.Perturbations;
+using Sibyl.Cosmology.Gravity;
+using Sibyl.Cosmology.Growth;
+using Sibyl.Cosmology.Parameters;
+
+namespace Sibyl.Cosmology.Tests.Boltzmann;
+
+public class ModeSolverTests
+{
+    private static readonly CosmologyParameters Planck = new();
+    private static readonly TransferSolver Solver = new(new RadiationBackground(Planck), Planck.HeliumFraction);
+
+    [Fact]
+    public void Curvature_on_uniform_density_slices_stays_constant_outside_the_horizon()
+    {
+        // Adiabatic modes conserve ζ outside the horizon (Bardeen, Steinhardt & Turner 1983, PRD 28, 679;
+        // Wands, Malik, Lyth & Liddle 2000, PRD 62, 043527) to O((kτ)²). At k = 1e-6/Mpc, kτ ≤ 0.014 until today,
+        // so (kτ)² ≤ 2e-4 bounds the drift through equality, recombination and Λ domination; tolerance 5e-4.
+        const double k = 1e-6;
+        var settings = new BoltzmannSettings();
+        var layout = new ModeLayout(settings.PhotonMultipoles, settings.PolarizationMultipoles, settings.NeutrinoMultipoles);
+        var mode = new ModeSolver(Solver.Background, settings);
+        var state = new double[layout.Dimension];
+        foreach (double z in new[] { 1e5, 3400.0, 1100.0, 10.0, 0.0 })
+        {
+            var equations = new ModeEquations(Solver.Background, layout, k);
+            double lnA = -Math.Log(1.0 + z);
+            mode.Evolve(equations, k, lnA, state);
+            Assert.Equal(1.0, equations.UniformDensityCurvature(lnA, state), 5e-4);
+        }
+    }
+
+    [Fact]
+    public void Matter_contrast_on_the_largest_scales_follows_the_matter_era_Poisson_limit()
+    {
+        // Outside the horizon until matter domination, ζ = 1 gives Φ = (3/5)ζ in the matter era and, by Poisson's
+        // equation in the comoving (here CDM) frame, δ_m = (2/5)(k/H0)² D(a)/Ω_m with D → a early (Dodelson 2003,
+        // Modern Cosmology, §7.2). So the transfer function T = δ_m / [(2/5)(k/H0)² D(1)/Ω_m] → 1 as k → 0.
+        // Corrections: the equality-era decaying mode and today's radiation, each ~a_eq ≈ 3e-4, and (kτ0)² ≈ 2e-4
+        // at k = 1e-5 h/Mpc; tolerance 2e-3.
+        var background = new RadiationBackground(Planck);
+        double growthToday = LinearGrowth.Solve(new ExpansionHistory(background.OmegaMatter), GeneralRelativity.Instance, 1.0).D;
+        double k = 1e-5 * Planck.H;
+        double contrast = new ModeSolver(Solver.Background, new BoltzmannSettings()).MatterContrast(k);
+        double poisson = 0.4 * Math.Pow(k / background.HubbleToday, 2) * growthToday / background.OmegaMatter;
+        Assert.Equal(1.0, contrast / poisson, 2e-3);
+    }
+
+    [Theory]
+    [InlineData(0.01)]
+    [InlineData(0.05)]
+    [InlineData(0.1)]
+    [InlineData(0.2)]
+    [InlineData(0.5)]
+    [InlineData(1.0)]
+    public void Halving_the_tolerance_and_doubling_the_hierarchies_changes_the_spectrum_by_less_than_1e3(double kInHPerMpc)
+    {
+        // Issue requirement: P_L converged to 1e-3 for k ≤ 1 h/Mpc. P ∝ δ_m², so δ_m must move by less than 5e-4.
+        var defaults = new BoltzmannSettings();
+        var finer = defaults with
+        {
+            RelativeTolerance = defaults.RelativeTolerance / 2,
+            PhotonMultipoles = 2 * defaults.PhotonMultipoles,
+            PolarizationMultipoles = 2 * defaults.PolarizationMultipoles,
+            NeutrinoMultipoles = 2 * defaults.NeutrinoMultipoles,
+        };
+        AssertPowerConverged(kInHPerMpc, defaults, finer);
+    }
+
+    [Theory]
+    [InlineData(0.01)]
+    [InlineData(0.05)]
+    [InlineData(0.1)]
+    [InlineData(0.2)]
+    [InlineData(0.5)]
+    [InlineData(1.0)]
+    public void Ending_tight_coupling_earlier_and_free_streaming_later_changes_the_spectrum_by_less_than_1e3(double kInHPerMpc)
+    {
+        // The approximations are switched with margins; halving the tight-coupling limits and doubling the
+        // free-streaming triggers must leave P_L within the same 1e-3.
+        var defaults = new BoltzmannSettings();
+        var later = defaults with
+        {
+            TightCouplingLimit = defaults.TightCouplingLimit / 2,
+            TightCouplingWavenumberLimit = defaults.TightCouplingWavenumberLimit / 2,
+            StreamingMinKTau = 2 * defaults.StreamingMinKTau,
+            StreamingMaxOpacity = defaults.StreamingMaxOpacity / 2,
+        };
+        AssertPowerConverged(kInHPerMpc, defaults, later);
+    }
+
+    [Fact]
+    public void Bad_settings_name_the_field_and_its_range()
+    {
+        var error = Assert.Throws<ArgumentOutOfRangeException>(() => new ModeSolver(Solver.Background, new BoltzmannSettings { NeutrinoMultipoles = 2 }));
+        Assert.Contains("NeutrinoMultipoles must lie in [4, 200]", error.Message, StringComparison.Ordinal);
+    }
+
+    private static void AssertPowerConverged(double kInHPerMpc, BoltzmannSettings reference, BoltzmannSettings changed)
+    {
+        double k = kInHPerMpc * Planck.H;
+        double a = new ModeSolver(Solver.Background, reference).MatterContrast(k);
+        double b = new ModeSolver(Solver.Background, changed).MatterContrast(k);
+        Assert.Equal(1.0, b * b / (a * a), 1e-3);
+    }
+}
