@@ -1,4 +1,5 @@
 using Sibyl.Cosmology.Background;
+using Sibyl.Cosmology.Boltzmann;
 using Sibyl.Cosmology.Gravity;
 using Sibyl.Cosmology.Growth;
 using Sibyl.Cosmology.Linear;
@@ -37,12 +38,26 @@ public sealed class CosmologyModel
     /// <summary>Linear spectrum shape and its no-wiggle partner (growth units).</summary>
     public LinearSpectrum Linear { get; }
 
-    /// <summary>Builds the model with the Eisenstein &amp; Hu (1998) linear spectrum.</summary>
+    /// <summary>Builds the model with a built-in linear spectrum: the Eisenstein &amp; Hu (1998) fit unless told otherwise.</summary>
+    /// <param name="parameters">Cosmology.</param>
+    /// <param name="source">Where the linear spectrum comes from; <see cref="LinearSource.Boltzmann"/> takes about a second.</param>
+    /// <param name="threads">
+    /// Threads of the Boltzmann solver: 0 (default) for every core, 1 inside a run that is already parallel over
+    /// cosmologies. The fit ignores it.
+    /// </param>
     /// <exception cref="ParameterOutOfRangeException">A parameter is out of range.</exception>
-    public static CosmologyModel Create(CosmologyParameters parameters)
+    /// <exception cref="ArgumentOutOfRangeException"><paramref name="threads"/> is negative or <paramref name="source"/> unknown.</exception>
+    public static CosmologyModel Create(CosmologyParameters parameters, LinearSource source = LinearSource.Fit, int threads = 0)
     {
+        ArgumentOutOfRangeException.ThrowIfNegative(threads);
         var (background, gravity, growthToday) = Dynamics(parameters);
-        return new CosmologyModel(parameters, background, gravity, growthToday, LinearSpectrumFactory.FromFittingFormula(parameters, growthToday));
+        var linear = source switch
+        {
+            LinearSource.Fit => LinearSpectrumFactory.FromFittingFormula(parameters, growthToday),
+            LinearSource.Boltzmann => BoltzmannLinear.Compute(parameters, growthToday, threads),
+            _ => throw new ArgumentOutOfRangeException(nameof(source), source, "unknown linear source"),
+        };
+        return new CosmologyModel(parameters, background, gravity, growthToday, linear);
     }
 
     /// <summary>

@@ -92,6 +92,13 @@ internal static class HelpText
         }
 
         text.Append(CultureInfo.InvariantCulture, $"  {ParameterCatalog.ModelName,-11} [lcdm] one of {string.Join(", ", ParameterCatalog.Models.Keys)}\n");
+        text.Append(CultureInfo.InvariantCulture, $"  {ParameterCatalog.LinearName,-11} [fit] one of {string.Join(", ", ParameterCatalog.LinearSources.Keys)}: the Eisenstein & Hu (1998) fitting formula,\n");
+        text.Append("""
+                          or the built-in Einstein-Boltzmann solver (about 1 s; the only source reading N_eff
+                          and Y_He). compute linear linear=boltzmann adds the fit's P_lin and P_nw and the
+                          ratio P_lin/P_lin_fit, and --plot draws the two against each other
+
+            """);
         text.Append("\ncompute matter also takes:\n");
         Describe(text, MatterLayout.SoundSpeedDefinition);
         text.Append("\ncompute galaxy also takes (nuisance parameters):\n");
@@ -105,9 +112,9 @@ internal static class HelpText
             options:
               --kmin K   [{{PointArguments.DefaultKMin:G}}] smallest output k, h/Mpc
               --kmax K   [{{PointArguments.DefaultKMax:G}}] largest output k, h/Mpc (matter and galaxy need k a factor
-                         10 inside the linear table: [1e-4, 10] for the fit)
+                         10 inside the linear table: [1e-4, 10] for the fit and the solver)
               --nk N     [{{PointArguments.DefaultKCount}}] number of log-spaced k values
-              --table F  linear P(k) at z = 0 of the GR counterpart, two columns k, P (replaces the fit;
+              --table F  linear P(k) at z = 0 of the GR counterpart, two columns k, P (replaces linear=;
                          its amplitude replaces ln10As/sigma8; never extrapolated; loops integrate
                          over its range only, so give it a wide one, e.g. 1e-5 to 50 h/Mpc)
               --out F    write the CSV to F (atomically) instead of stdout

@@ -1,21 +1,27 @@
 using System.Globalization;
 using Sibyl.Cli.Arguments;
 using Sibyl.Cosmology;
+using Sibyl.Cosmology.Linear;
 using Sibyl.Cosmology.Parameters;
 using Sibyl.Perturbation.Loops;
 
 namespace Sibyl.Cli.Commands;
 
 /// <summary>The cosmology, redshift and k grid shared by every <c>compute</c> output.</summary>
-internal sealed record PointArguments(CosmologyModel Model, double Redshift, double[] K)
+/// <param name="Model">The cosmology with its linear spectrum.</param>
+/// <param name="Redshift">Output redshift.</param>
+/// <param name="K">Output wavenumbers, h/Mpc.</param>
+/// <param name="Source">The built-in linear source, or null when <c>--table</c> supplied the spectrum.</param>
+internal sealed record PointArguments(CosmologyModel Model, double Redshift, double[] K, LinearSource? Source)
 {
     public const double DefaultKMin = 1e-3, DefaultKMax = 1.0;
     public const int DefaultKCount = 200;
 
     public static PointArguments Parse(CommandArguments args)
     {
-        args.MarkUsed(ParameterCatalog.All.Select(d => d.Name).Append(ParameterCatalog.ModelName).Append(ParameterCatalog.Redshift.Name));
+        args.MarkUsed(ParameterCatalog.All.Select(d => d.Name).Append(ParameterCatalog.ModelName).Append(ParameterCatalog.LinearName).Append(ParameterCatalog.Redshift.Name));
         var parameters = ParameterCatalog.Build(args.Parameters);
+        var source = ParameterCatalog.LinearSourceOf(args.Parameters);
         double z = args.Parameters.TryGetValue(ParameterCatalog.Redshift.Name, out var zText)
             ? ParameterCatalog.Redshift.Check(ParameterCatalog.ParseNumber(ParameterCatalog.Redshift.Name, zText))
             : ParameterCatalog.Redshift.Default;
@@ -32,10 +38,15 @@ internal sealed record PointArguments(CosmologyModel Model, double Redshift, dou
         CosmologyModel model;
         if (table is null)
         {
-            model = CosmologyModel.Create(parameters);
+            model = CosmologyModel.Create(parameters, source);
         }
         else
         {
+            if (args.Parameters.ContainsKey(ParameterCatalog.LinearName))
+            {
+                throw new UsageException($"{ParameterCatalog.LinearName}: --table supplies the linear spectrum; give one or the other, not both");
+            }
+
             var (k, p) = LinearTableReader.Read(table);
             try
             {
@@ -52,7 +63,7 @@ internal sealed record PointArguments(CosmologyModel Model, double Redshift, dou
             }
         }
 
-        return new PointArguments(model, z, Cosmology.Linear.LogGridFunction.LogGrid(kMin, kMax, count));
+        return new PointArguments(model, z, LogGridFunction.LogGrid(kMin, kMax, count), table is null ? source : null);
     }
 
     /// <summary>One-loop outputs integrate over the linear table, so their k must sit a factor 10 inside it.</summary>

@@ -1,4 +1,5 @@
 using System.Globalization;
+using Sibyl.Cosmology.Linear;
 
 namespace Sibyl.Cosmology.Parameters;
 
@@ -11,6 +12,9 @@ public static class ParameterCatalog
 {
     /// <summary>Gravity-model selector name.</summary>
     public const string ModelName = "model";
+
+    /// <summary>Linear-source selector name.</summary>
+    public const string LinearName = "linear";
 
     /// <summary>h.</summary>
     public static ParameterDefinition H { get; } = new("h", 0.6766, 0, false, 2, true, "", "H0 / (100 km/s/Mpc)");
@@ -51,14 +55,26 @@ public static class ParameterCatalog
     /// <summary>T_CMB.</summary>
     public static ParameterDefinition CmbTemperature { get; } = new("T_cmb", 2.7255, 2, true, 3, true, "K", "CMB temperature");
 
+    /// <summary>N_eff; read by the Boltzmann solver only.</summary>
+    public static ParameterDefinition NEff { get; } = new("N_eff", 3.046, 0, true, 10, true, "", "effective number of massless neutrino species, linear=boltzmann only");
+
+    /// <summary>Y_He; read by the Boltzmann solver only.</summary>
+    public static ParameterDefinition HeliumFraction { get; } = new("Y_He", 0.2454, 0, false, 0.5, false, "", "primordial helium mass fraction, linear=boltzmann only");
+
     /// <summary>Output redshift; not part of the cosmology but set with it.</summary>
     public static ParameterDefinition Redshift { get; } = new("z", 0, 0, true, 20, true, "", "output redshift");
 
     /// <summary>All cosmological parameters in help order (the model selector is separate).</summary>
     public static IReadOnlyList<ParameterDefinition> All { get; } =
     [
-        H, OmegaBaryon, OmegaCdm, SpectralIndex, Ln10As, Sigma8, W0, Wa, OmegaRc, Mu0, Vertex2, Vertex3, CmbTemperature,
+        H, OmegaBaryon, OmegaCdm, SpectralIndex, Ln10As, Sigma8, W0, Wa, OmegaRc, Mu0, Vertex2, Vertex3, CmbTemperature, NEff, HeliumFraction,
     ];
+
+    /// <summary>
+    /// Parameters that only <see cref="LinearSource.Boltzmann"/> reads: the fit and a user's table ignore them, so
+    /// setting them for another source is refused rather than silently doing nothing.
+    /// </summary>
+    public static IReadOnlyList<ParameterDefinition> BoltzmannOnly { get; } = [NEff, HeliumFraction];
 
     /// <summary>Model names accepted after <c>model=</c>.</summary>
     public static IReadOnlyDictionary<string, GravityKind> Models { get; } = new Dictionary<string, GravityKind>(StringComparer.Ordinal)
@@ -67,6 +83,16 @@ public static class ParameterCatalog
         ["ndgp"] = GravityKind.Ndgp,
         ["qs"] = GravityKind.QuasiStatic,
     };
+
+    /// <summary>Linear-source names accepted after <c>linear=</c>; <c>fit</c> is the default.</summary>
+    public static IReadOnlyDictionary<string, LinearSource> LinearSources { get; } = new Dictionary<string, LinearSource>(StringComparer.Ordinal)
+    {
+        ["fit"] = LinearSource.Fit,
+        ["boltzmann"] = LinearSource.Boltzmann,
+    };
+
+    /// <summary>The name of <paramref name="source"/> after <c>linear=</c> and in grid specs.</summary>
+    public static string NameOf(LinearSource source) => LinearSources.First(s => s.Value == source).Key;
 
     /// <summary>Parses a finite number written in the invariant culture.</summary>
     /// <exception cref="ParameterOutOfRangeException">Empty, not a number, or not finite.</exception>
@@ -129,6 +155,8 @@ public static class ParameterCatalog
             Vertex2 = Get(Vertex2),
             Vertex3 = Get(Vertex3),
             CmbTemperature = Get(CmbTemperature),
+            NEff = Get(NEff),
+            HeliumFraction = Get(HeliumFraction),
         };
         RequireModelParameters(values, gravity);
         Validate(parameters);
@@ -151,6 +179,8 @@ public static class ParameterCatalog
         Vertex2.Check(p.Vertex2);
         Vertex3.Check(p.Vertex3);
         CmbTemperature.Check(p.CmbTemperature);
+        NEff.Check(p.NEff);
+        HeliumFraction.Check(p.HeliumFraction);
         if ((p.Ln10As is null) == (p.Sigma8 is null))
         {
             throw new ParameterOutOfRangeException(Sigma8.Name, "exactly one of ln10As and sigma8 must be set");
@@ -181,6 +211,31 @@ public static class ParameterCatalog
         {
             throw new ParameterOutOfRangeException(ModelName, "ndgp lives on a LCDM background: leave w0 = -1 and wa = 0");
         }
+    }
+
+    /// <summary>
+    /// The linear source named by <c>linear=</c> in <paramref name="values"/> (<see cref="LinearSource.Fit"/> when absent).
+    /// </summary>
+    /// <exception cref="ParameterOutOfRangeException">The name is unknown, or a parameter of <see cref="BoltzmannOnly"/>
+    /// is given for another source.</exception>
+    public static LinearSource LinearSourceOf(IReadOnlyDictionary<string, string> values)
+    {
+        ArgumentNullException.ThrowIfNull(values);
+        var source = LinearSource.Fit;
+        if (values.TryGetValue(LinearName, out var text) && !LinearSources.TryGetValue(text, out source))
+        {
+            throw new ParameterOutOfRangeException(LinearName, $"must be one of {string.Join(", ", LinearSources.Keys)}, got '{text}'");
+        }
+
+        foreach (var definition in BoltzmannOnly)
+        {
+            if (source != LinearSource.Boltzmann && values.ContainsKey(definition.Name))
+            {
+                throw new ParameterOutOfRangeException(definition.Name, $"applies only to {LinearName}={NameOf(LinearSource.Boltzmann)}");
+            }
+        }
+
+        return source;
     }
 
     private static void RequireModelParameters(IReadOnlyDictionary<string, string> values, GravityKind gravity)

@@ -1,5 +1,4 @@
 using Sibyl.Cosmology;
-using Sibyl.Cosmology.Linear;
 using Sibyl.Perturbation.Matter;
 using Sibyl.Perturbation.RedshiftSpace;
 using Sibyl.Perturbation.Spectra;
@@ -30,8 +29,7 @@ public sealed class PointCalculator
         _design = design;
         var spec = design.Spec;
         var k = spec.K.ToArray();
-        double qMin = spec.Linear?.KMin ?? LinearSpectrumFactory.DefaultKMin;
-        double qMax = spec.Linear?.KMax ?? LinearSpectrumFactory.DefaultKMax;
+        double qMin = spec.LinearKMin, qMax = spec.LinearKMax;
         if (spec.Output == OutputKind.Matter)
         {
             _matter = new OneLoopMatter(k, qMin, qMax);
@@ -62,7 +60,8 @@ public sealed class PointCalculator
         CosmologyModel model;
         if (_provider is null)
         {
-            model = CosmologyModel.Create(parameters);
+            // One solver thread: the run is already parallel over points.
+            model = CosmologyModel.Create(parameters, spec.LinearSource, threads: 1);
         }
         else
         {

@@ -1,3 +1,4 @@
+using Sibyl.Cosmology.Linear;
 using Sibyl.Cosmology.Parameters;
 
 namespace Sibyl.Training.Specs;
@@ -42,8 +43,23 @@ public sealed record GridSpec
     /// <summary>Points per chunk file: the unit of atomic writes, resumption and sharding.</summary>
     public required int ChunkSize { get; init; }
 
-    /// <summary>The user's linear-spectrum program, or null for the Eisenstein &amp; Hu (1998) fit.</summary>
+    /// <summary>The user's linear-spectrum program, or null for the built-in <see cref="LinearSource"/>.</summary>
     public ExternalLinearCommand? Linear { get; init; }
+
+    /// <summary>
+    /// The built-in linear spectrum of every point when <see cref="Linear"/> is null: the Eisenstein &amp; Hu (1998)
+    /// fit (default) or the Boltzmann solver. Ignored when <see cref="Linear"/> is set.
+    /// </summary>
+    public LinearSource LinearSource { get; init; } = LinearSource.Fit;
+
+    /// <summary>Lower end of every point's linear table, h/Mpc: the program's k_min, else the built-in sources' range.</summary>
+    public double LinearKMin => Linear?.KMin ?? LinearSpectrumFactory.DefaultKMin;
+
+    /// <summary>Upper end of every point's linear table, h/Mpc.</summary>
+    public double LinearKMax => Linear?.KMax ?? LinearSpectrumFactory.DefaultKMax;
+
+    /// <summary>True when every point's linear spectrum comes from the Boltzmann solver.</summary>
+    public bool UsesBoltzmann => Linear is null && LinearSource == LinearSource.Boltzmann;
 
     /// <summary>True when z is one of the varied parameters.</summary>
     public bool VariesRedshift => Varied.Any(v => v.Name == ParameterCatalog.Redshift.Name);

@@ -1,6 +1,8 @@
 using System.Security.Cryptography;
 using System.Text;
 using System.Text.Json;
+using Sibyl.Cosmology.Linear;
+using Sibyl.Cosmology.Parameters;
 
 namespace Sibyl.Training.Specs;
 
@@ -67,6 +69,11 @@ public static class GridSpecJson
                 json.WriteNumber("k_min", linear.KMin);
                 json.WriteNumber("k_max", linear.KMax);
                 json.WriteEndObject();
+            }
+            else if (spec.LinearSource != LinearSource.Fit)
+            {
+                // The fit stays implicit, so specs written before the solver existed keep their hash.
+                json.WriteString("linear", ParameterCatalog.NameOf(spec.LinearSource));
             }
 
             json.WriteEndObject();

@@ -1,5 +1,7 @@
 using System.Globalization;
 using System.Text.Json;
+using Sibyl.Cosmology.Linear;
+using Sibyl.Cosmology.Parameters;
 
 namespace Sibyl.Training.Specs;
 
@@ -106,7 +108,7 @@ public static class GridSpecReader
         }
 
         int chunkSize = root.TryGetProperty("chunk_size", out var chunkElement) ? Integer(chunkElement, "chunk_size", 1, 100_000, problems) : DefaultChunkSize;
-        var linear = root.TryGetProperty("linear", out var linearElement) ? ReadLinear(linearElement, problems) : null;
+        var (linear, source) = root.TryGetProperty("linear", out var linearElement) ? ReadLinear(linearElement, problems) : (null, LinearSource.Fit);
 
         return new GridSpec
         {
@@ -122,6 +124,7 @@ public static class GridSpecReader
             Seed = seed,
             ChunkSize = chunkSize,
             Linear = linear,
+            LinearSource = source,
         };
     }
 
@@ -216,7 +219,7 @@ public static class GridSpecReader
             return [];
         }
 
-        return Cosmology.Linear.LogGridFunction.LogGrid(lo, hi, count);
+        return LogGridFunction.LogGrid(lo, hi, count);
     }
 
     private static (int Training, int HeldOut) ReadPoints(JsonElement root, List<string> problems)
@@ -240,12 +243,20 @@ public static class GridSpecReader
         return (training, heldOut);
     }
 
-    private static ExternalLinearCommand? ReadLinear(JsonElement element, List<string> problems)
+    /// <summary>Either a built-in source by name or a user's program as an object.</summary>
+    private static (ExternalLinearCommand? Command, LinearSource Source) ReadLinear(JsonElement element, List<string> problems)
     {
+        if (element.ValueKind == JsonValueKind.String && ParameterCatalog.LinearSources.TryGetValue(element.GetString()!, out var source))
+        {
+            return (null, source);
+        }
+
         if (element.ValueKind != JsonValueKind.Object)
         {
-            problems.Add("linear: must be an object {\"command\": [program, args...], \"timeout_seconds\": s, \"k_min\": ..., \"k_max\": ...}");
-            return null;
+            string names = string.Join(", ", ParameterCatalog.LinearSources.Keys.Select(n => $"\"{n}\""));
+            problems.Add(
+                $"linear: must be one of {names} (built-in sources) or an object {{\"command\": [program, args...], \"timeout_seconds\": s, \"k_min\": ..., \"k_max\": ...}} (your own program), got {element.GetRawText()}");
+            return (null, LinearSource.Fit);
         }
 
         foreach (var property in element.EnumerateObject())
@@ -278,7 +289,7 @@ public static class GridSpecReader
         double timeout = element.TryGetProperty("timeout_seconds", out var tElement) ? Number(tElement, "linear.timeout_seconds", problems) ?? 0 : 600;
         double kMin = element.TryGetProperty("k_min", out var loElement) ? Number(loElement, "linear.k_min", problems) ?? 0 : 1e-4;
         double kMax = element.TryGetProperty("k_max", out var hiElement) ? Number(hiElement, "linear.k_max", problems) ?? 0 : 50;
-        return new ExternalLinearCommand(command, timeout, kMin, kMax);
+        return (new ExternalLinearCommand(command, timeout, kMin, kMax), LinearSource.Fit);
     }
 
     private static string? String(JsonElement root, string field, List<string> problems)

@@ -52,6 +52,12 @@ internal static partial class GridSpecValidator
             : null;
     }
 
+    /// <summary>The fit and a user's program ignore N_eff and Y_He; a spec setting them would train on a flat direction.</summary>
+    private static string? SourceProblem(GridSpec spec, string name) =>
+        !spec.UsesBoltzmann && ParameterCatalog.BoltzmannOnly.Any(d => d.Name == name)
+            ? $"is read only by the Boltzmann solver; set \"{ParameterCatalog.LinearName}\": \"{ParameterCatalog.NameOf(LinearSource.Boltzmann)}\" or leave it out"
+            : null;
+
     private static void CheckVaried(GridSpec spec, List<string> problems)
     {
         if (spec.Varied.Count == 0)
@@ -67,7 +73,7 @@ internal static partial class GridSpecValidator
         foreach (var v in spec.Varied)
         {
             string field = $"vary.{v.Name}";
-            if (NameProblem(v.Name) is { } problem)
+            if ((NameProblem(v.Name) ?? SourceProblem(spec, v.Name)) is { } problem)
             {
                 problems.Add($"{field}: {problem}");
                 continue;
@@ -104,7 +110,7 @@ internal static partial class GridSpecValidator
                 continue;
             }
 
-            if (NameProblem(name) is { } problem)
+            if ((NameProblem(name) ?? SourceProblem(spec, name)) is { } problem)
             {
                 problems.Add($"{field}: {problem}");
                 continue;
@@ -190,9 +196,7 @@ internal static partial class GridSpecValidator
             return;
         }
 
-        double tableMin = spec.Linear?.KMin ?? LinearSpectrumFactory.DefaultKMin;
-        double tableMax = spec.Linear?.KMax ?? LinearSpectrumFactory.DefaultKMax;
-        double lowest = tableMin * LoopQuadrature.RangeMargin, highest = tableMax / LoopQuadrature.RangeMargin;
+        double lowest = spec.LinearKMin * LoopQuadrature.RangeMargin, highest = spec.LinearKMax / LoopQuadrature.RangeMargin;
         for (int i = 0; i < spec.K.Count; i++)
         {
             double k = spec.K[i];

@@ -8,8 +8,8 @@ namespace Sibyl.Demo.Theory;
 
 /// <summary>
 /// The direct one-loop calculation (<see cref="OneLoopGalaxy"/>) for the cosmologies of a grid spec's box: the same
-/// fixed parameters, gravity model, k grid and default linear spectrum as the emulator's training points
-/// (<see cref="GridPoint.Cosmology"/>), so the two theories differ only by the emulation error.
+/// fixed parameters, gravity model, k grid and built-in linear source (fit or Boltzmann solver) as the emulator's
+/// training points (<see cref="GridPoint.Cosmology"/>), so the two theories differ only by the emulation error.
 /// </summary>
 public sealed class DirectTheory : ISpectrumTheory
 {
@@ -68,7 +68,8 @@ public sealed class DirectTheory : ISpectrumTheory
     private BasisSpectra Compute(double[] point)
     {
         TheoryBox.Check(this, point);
-        var model = CosmologyModel.Create(GridPoint.Cosmology(_spec, point));
+        // One solver thread per cosmology: the points are already computed in parallel.
+        var model = CosmologyModel.Create(GridPoint.Cosmology(_spec, point), _spec.LinearSource, threads: 1);
         var shape = _galaxy.Prepare(model.Linear);
         var time = TimeCoefficientSolver.Solve(model.Background, model.Gravity, 1.0 / (1.0 + Redshift));
         return _galaxy.Evaluate(shape, time).Basis;
