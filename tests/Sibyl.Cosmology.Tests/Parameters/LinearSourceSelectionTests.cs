@@ -117,7 +117,7 @@ public class LinearSourceSelectionTests
         Assert.Throws<ArgumentOutOfRangeException>(() => CosmologyModel.Create(new CosmologyParameters(), LinearSource.Fit, threads: -1));
     }
 
-    [Fact(Skip = "needs the Boltzmann solver")]
+    [Fact]
     public void The_boltzmann_source_is_the_solver_and_close_to_the_fit()
     {
         // The fit is good to a few per cent (Eisenstein & Hu 1998); 10 % at k = 0.1 h/Mpc leaves room for its BAO
@@ -133,7 +133,7 @@ public class LinearSourceSelectionTests
         Assert.Equal(LinearSpectrumFactory.DefaultKMax, solver.Linear.KMax, 1e-9);
     }
 
-    [Fact(Skip = "needs the Boltzmann solver")]
+    [Fact]
     public void N_eff_changes_the_solver_spectrum()
     {
         // More radiation delays matter-radiation equality and moves the turnover: the shape at k = 0.1 h/Mpc must

@@ -107,7 +107,7 @@ public class LinearSourceSpecTests
         Assert.Equal(0.24, parameters.HeliumFraction);
     }
 
-    [Fact(Skip = "needs the Boltzmann solver")]
+    [Fact]
     public void A_solver_point_is_the_direct_calculation_on_the_solver_spectrum()
     {
         // The run and `sibyl compute matter linear=boltzmann` must be one calculation; the solver on one thread
