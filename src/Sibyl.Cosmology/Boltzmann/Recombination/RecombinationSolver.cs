@@ -5,14 +5,14 @@ namespace Sibyl.Cosmology.Boltzmann.Recombination;
 /// until He III has recombined, then the rate equations of <see cref="RecombinationRates"/> by the
 /// second-order backward differentiation formula (BDF2). The rates exceed the expansion rate by up to
 /// ~10⁷ where the integration starts, so an explicit scheme would need steps far below the grid spacing;
-/// BDF2 is L-stable, so the stiff quantities sit on their quasi-equilibrium (Saha, T_b ≈ T_γ) at any step,
-/// and second order keeps the error at the grid spacing of 1e-3 near 1e-6 in x_e.
+/// BDF2 is L-stable, so the stiff quantities sit on their quasi-equilibrium (Saha, T_b ≈ T_γ) at any step.
+/// At the grid spacing of 1e-3 the history agrees with one on a four times finer grid to 2e-5 in x_e and
+/// 1e-6 in z_* (measured for Planck 2018 parameters).
 /// </summary>
 internal static class RecombinationSolver
 {
     /// <summary>He III fraction below which it no longer changes x_e at double precision; the ODEs take over there.</summary>
     private const double HeliumIIISwitch = 1e-9;
-
 
     /// <summary>Solves the thermal history; outputs are per node of <paramref name="grid"/>.</summary>
     /// <param name="grid">The ln a grid.</param>

@@ -14,7 +14,8 @@ public sealed partial class ThermalHistory
     /// <summary>
     /// Baryon sound speed squared c_s² = (k_B T_b / (μ m_H c²)) (1 − (1/3) d ln T_b / d ln a), dimensionless
     /// (c = 1), μ the mean molecular weight in units of m_H counting free electrons (Ma &amp; Bertschinger
-    /// 1995, ApJ 455, 7, eq. 68). Before <see cref="LnAStart"/> the scaling c_s² ∝ a⁻¹ of T_b = T_γ is used.
+    /// 1995, ApJ 455, 7, eq. 68). Before <see cref="LnAStart"/> the scaling c_s² ∝ a⁻¹ of T_b = T_γ is used;
+    /// after a = 1 the value at a = 1.
     /// </summary>
     /// <param name="lnA">ln a.</param>
     public double BaryonSoundSpeedSquared(double lnA) =>
