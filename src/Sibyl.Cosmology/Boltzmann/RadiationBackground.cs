@@ -13,10 +13,11 @@ public sealed class RadiationBackground
     public const double SpeedOfLight = 299792.458;
 
     /// <summary>
-    /// ω_γ per (T_CMB / 2.7255 K)⁴: ρ_γ = a_rad T⁴ over the critical density for h = 1,
-    /// with a_rad = 7.565723e-16 J m⁻³ K⁻⁴ and ρ_crit c² = 1.878340e-26 h² kg m⁻³ · c² (CODATA 2018).
+    /// ω_γ per (T_CMB / 2.7255 K)⁴: ρ_γ = a_rad T⁴ / c² over the critical density 3 (100 km/s/Mpc)² / (8πG),
+    /// with a_rad = π² k_B⁴ / (15 ħ³ c³) = 7.565733e-16 J m⁻³ K⁻⁴ and G = 6.67430e-11 m³ kg⁻¹ s⁻² (CODATA 2018),
+    /// which give ρ_crit = 1.878342e-26 h² kg m⁻³ and ω_γ = 2.472975e-5.
     /// </summary>
-    public const double PhotonDensityAt2725 = 2.47282e-5;
+    public const double PhotonDensityAt2725 = 2.472975e-5;
 
     /// <summary>Energy density of one massless neutrino species per photon density: (7/8)(4/11)^{4/3}.</summary>
     public static readonly double NeutrinoPerPhoton = 7.0 / 8.0 * Math.Pow(4.0 / 11.0, 4.0 / 3.0);
