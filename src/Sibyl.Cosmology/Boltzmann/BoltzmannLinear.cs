@@ -16,7 +16,9 @@ public static class BoltzmannLinear
     /// <summary>Largest wavenumber the solver itself runs at, h/Mpc; above it the fit's shape continues.</summary>
     public const double SolverKMax = 5.0;
 
-    /// <summary>Solver wavenumbers (h/Mpc): 6 per decade below 0.008, every 0.006 through the BAO range, 12 per decade above 0.4.</summary>
+    private const double LinearEnd = 0.6;
+
+    /// <summary>Solver wavenumbers (h/Mpc): 6 per decade below 0.008, every 0.006 through the BAO range to 0.6, 20 per decade above.</summary>
     public static IReadOnlyList<double> Nodes { get; } = BuildNodes();
 
     /// <summary>Number of solver wavenumbers.</summary>
@@ -79,12 +81,12 @@ public static class BoltzmannLinear
             nodes.Add(Math.Exp(lnK));
         }
 
-        for (double k = 0.008; k < 0.4; k += 0.006)
+        for (double k = 0.008; k < LinearEnd; k += 0.006)
         {
             nodes.Add(k);
         }
 
-        for (double lnK = Math.Log(0.4); lnK <= Math.Log(SolverKMax) + 1e-9; lnK += Math.Log(10) / 12)
+        for (double lnK = Math.Log(LinearEnd); lnK <= Math.Log(SolverKMax) + 1e-9; lnK += Math.Log(10) / 20)
         {
             nodes.Add(Math.Exp(lnK));
         }
