@@ -115,33 +115,4 @@ public sealed class RadiationBackground
         double conformalHubbleSquared = a2 * HubbleToday * HubbleToday * total;
         return -0.5 * conformalHubbleSquared * (1.0 + 3.0 * pressure / total);
     }
-
-    /// <summary>
-    /// Conformal time τ(a) = ∫ da / (a² H) in Mpc, integrated in ln a by Simpson's rule from a = 1e-12 with the
-    /// radiation-era value a/(H0 √Ω_r) as its start; <paramref name="stepsPerUnitLnA"/> = 200 gives about 1e-9 relative.
-    /// </summary>
-    public double ConformalTime(double a, int stepsPerUnitLnA = 200)
-    {
-        const double start = 1e-12;
-        if (a <= start)
-        {
-            return a / (HubbleToday * Math.Sqrt(OmegaRadiation));
-        }
-
-        double lnStart = Math.Log(start), lnEnd = Math.Log(a);
-        int steps = 2 * Math.Max(4, (int)Math.Ceiling((lnEnd - lnStart) * stepsPerUnitLnA / 2.0));
-        double step = (lnEnd - lnStart) / steps, sum = 0.0;
-        for (int i = 0; i <= steps; i++)
-        {
-            double x = Math.Exp(lnStart + i * step);
-            double weight = i == 0 || i == steps ? 1.0 : (i % 2 == 1 ? 4.0 : 2.0);
-            sum += weight / ConformalHubble(x);
-        }
-
-        return start / (HubbleToday * Math.Sqrt(OmegaRadiation)) + sum * step / 3.0;
-    }
-
-    /// <summary>(3/2) 𝓗² Ω_i(a) written as 4πG a² ρ_i in 1/Mpc², for component density today <paramref name="omega"/> scaling as a^−<paramref name="power"/>.</summary>
-    public double GravitationalWeight(double omega, int power, double a) =>
-        1.5 * HubbleToday * HubbleToday * omega * Math.Pow(a, 2 - power);
 }

@@ -28,9 +28,6 @@ public sealed class TransferSolver
     /// <summary>The tabulated background the modes read.</summary>
     public ModeBackground Background => _background;
 
-    /// <summary>Integration steps taken by the last <see cref="MatterContrast"/> call, summed over modes.</summary>
-    public long LastSteps { get; private set; }
-
     /// <summary>δ_m(k, a = 1)/ζ for each <paramref name="k"/> in 1/Mpc.</summary>
     /// <param name="k">Wavenumbers in 1/Mpc, positive.</param>
     /// <param name="threads">Worker threads; 0 for all cores.</param>
@@ -41,7 +38,6 @@ public sealed class TransferSolver
         var result = new double[k.Count];
         var order = Enumerable.Range(0, k.Count).OrderByDescending(i => k[i]).ToArray();
         int next = -1;
-        long steps = 0;
         int workers = Math.Clamp(threads <= 0 ? Environment.ProcessorCount : threads, 1, Math.Max(1, k.Count));
         void Work()
         {
@@ -51,8 +47,6 @@ public sealed class TransferSolver
                 int i = order[j];
                 result[i] = solver.MatterContrast(k[i]);
             }
-
-            Interlocked.Add(ref steps, solver.Steps);
         }
 
         if (workers == 1)
@@ -70,7 +64,6 @@ public sealed class TransferSolver
             Task.WaitAll(tasks);
         }
 
-        LastSteps = steps;
         return result;
     }
 }

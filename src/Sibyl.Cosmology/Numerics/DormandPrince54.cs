@@ -34,12 +34,6 @@ public sealed class DormandPrince54
         _next = new double[dimension];
     }
 
-    /// <summary>Accepted steps since construction, for cost reports.</summary>
-    public long AcceptedSteps { get; private set; }
-
-    /// <summary>Rejected steps since construction.</summary>
-    public long RejectedSteps { get; private set; }
-
     /// <summary>
     /// Advances the first <paramref name="dimension"/> components of <paramref name="y"/> from <paramref name="t0"/> to
     /// <paramref name="t1"/> (t1 &gt; t0). The error of each component is measured against
@@ -157,7 +151,6 @@ public sealed class DormandPrince54
                 next.CopyTo(y0);
                 k7.CopyTo(k1);
                 t = tNext;
-                AcceptedSteps++;
                 // PI control (Hairer, Nørsett & Wanner §II.4, β = 0.04) damps the step oscillations a pure I controller shows near the stability limit.
                 double factor = 0.9 * Math.Pow(error, -0.7 / 5) * Math.Pow(previousError, 0.04);
                 previousError = Math.Max(error, 1e-4);
@@ -172,7 +165,6 @@ public sealed class DormandPrince54
             }
             else
             {
-                RejectedSteps++;
                 h *= Math.Max(0.2, 0.9 * Math.Pow(error, -0.2));
             }
 

@@ -57,15 +57,10 @@ public sealed class ModeBackground
             _table[i * Fields + OpacitySlopeField] =
                 Math.Log(_table[hi * Fields + OpacityField] / _table[lo * Fields + OpacityField]) / ((hi - lo) * Step);
         }
-
-        ConformalTimeToday = Time(0.0);
     }
 
     /// <summary>The background tabulated.</summary>
     public RadiationBackground Background { get; }
-
-    /// <summary>τ0 in Mpc.</summary>
-    public double ConformalTimeToday { get; }
 
     /// <summary>Smallest tabulated ln a.</summary>
     public double MinLnA => _lnAMin;
@@ -86,13 +81,6 @@ public sealed class ModeBackground
             g * t[o + 3] + f * t[o + 3 + Fields],
             g * t[o + 4] + f * t[o + 4 + Fields],
             g * t[o + 5] + f * t[o + 5 + Fields]);
-    }
-
-    /// <summary>Conformal time τ(ln a) in Mpc.</summary>
-    public double Time(double lnA)
-    {
-        At(lnA, out var p);
-        return p.Time;
     }
 
     /// <summary>

@@ -28,9 +28,6 @@ public sealed class ModeSolver
         _state = new double[_layout.Dimension];
     }
 
-    /// <summary>Integration steps taken so far, for cost reports.</summary>
-    public long Steps => _integrator.AcceptedSteps + _integrator.RejectedSteps;
-
     /// <summary>The ln a at which each regime starts for wavenumber <paramref name="k"/> (1/Mpc): tight coupling, full hierarchy, free streaming.</summary>
     public (double Start, double FullHierarchy, double FreeStreaming) Schedule(double k)
     {
