@@ -4,8 +4,9 @@ namespace Sibyl.Cosmology.Boltzmann.Perturbations;
 
 /// <summary>
 /// Evolves single k modes from outside the horizon to today: tight coupling while the photon mean free time
-/// is short against both 1/k and 1/𝓗, then the full hierarchies, then free-streaming radiation. One solver
-/// per thread; its buffers are reused mode after mode.
+/// is short against both 1/k and 1/𝓗, then the full hierarchies (integrated implicitly while Thomson scattering
+/// keeps them stiff, explicitly after), then free-streaming radiation. One solver per thread; its buffers are
+/// reused mode after mode.
 /// </summary>
 public sealed class ModeSolver
 {
@@ -13,6 +14,7 @@ public sealed class ModeSolver
     private readonly BoltzmannSettings _settings;
     private readonly ModeLayout _layout;
     private readonly DormandPrince54 _integrator;
+    private readonly LinearRosenbrock2 _implicitIntegrator;
     private readonly double[] _state;
 
     /// <summary>Creates a solver on <paramref name="background"/>.</summary>
@@ -25,11 +27,15 @@ public sealed class ModeSolver
         _settings = settings;
         _layout = new ModeLayout(settings.PhotonMultipoles, settings.PolarizationMultipoles, settings.NeutrinoMultipoles);
         _integrator = new DormandPrince54(_layout.Dimension);
+        _implicitIntegrator = new LinearRosenbrock2(_layout.Dimension);
         _state = new double[_layout.Dimension];
     }
 
-    /// <summary>The ln a at which each regime starts for wavenumber <paramref name="k"/> (1/Mpc): tight coupling, full hierarchy, free streaming.</summary>
-    public (double Start, double FullHierarchy, double FreeStreaming) Schedule(double k)
+    /// <summary>
+    /// The ln a at which each stage starts for wavenumber <paramref name="k"/> (1/Mpc): tight coupling, the full
+    /// hierarchy (implicit integration), its explicit integration, free streaming.
+    /// </summary>
+    public (double Start, double FullHierarchy, double Explicit, double FreeStreaming) Schedule(double k)
     {
         double startTime = _settings.InitialKTau / k;
         double start = Math.Min(Math.Max(_background.LnAAtTime(startTime), _background.MinLnA + 1e-3), Math.Log(1e-6));
@@ -37,7 +43,9 @@ public sealed class ModeSolver
         double full = _background.FirstWhere(p => k > wavenumberLimit * p.Opacity || p.ConformalHubble > limit * p.Opacity, start);
         double streaming = _background.FirstWhere(
             p => k * p.Time > _settings.StreamingMinKTau && p.Opacity < _settings.StreamingMaxOpacity * p.ConformalHubble, full);
-        return (start, full, streaming);
+        double ratio = _settings.ImplicitOpacityRatio;
+        double explicitStart = Math.Min(_background.FirstWhere(p => p.Opacity < ratio * Math.Max(k, p.ConformalHubble), full), streaming);
+        return (start, full, explicitStart, streaming);
     }
 
     /// <summary>
@@ -56,7 +64,7 @@ public sealed class ModeSolver
     public void Evolve(ModeEquations equations, double k, double lnAEnd, Span<double> state)
     {
         ArgumentNullException.ThrowIfNull(equations);
-        var (start, full, streaming) = Schedule(k);
+        var (start, full, explicitStart, streaming) = Schedule(k);
         equations.InitialConditions(start, state);
         double tolerance = _settings.RelativeTolerance, absolute = 1e-3 * tolerance;
         double step = 1e-3;
@@ -72,8 +80,10 @@ public sealed class ModeSolver
 
         equations.LeaveTightCoupling(full, state);
         equations.Regime = ModeRegime.FullHierarchy;
+        double stiffEnd = Math.Min(explicitStart, lnAEnd);
+        _implicitIntegrator.Integrate(equations.Derivative, state, n, full, stiffEnd, ref step, tolerance, absolute);
         end = Math.Min(streaming, lnAEnd);
-        _integrator.Integrate(equations.Derivative, state, n, full, end, ref step, tolerance, absolute);
+        _integrator.Integrate(equations.Derivative, state, n, stiffEnd, end, ref step, tolerance, absolute);
         if (end >= lnAEnd)
         {
             return;
