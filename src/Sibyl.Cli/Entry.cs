@@ -22,6 +22,9 @@ internal static class Entry
     /// <summary>An emulator check found errors above the limit the user set.</summary>
     public const int CheckFailed = 4;
 
+    /// <summary>A direct calculation failed numerically (the message names what and where).</summary>
+    public const int CalculationFailed = 5;
+
     /// <summary>Stopped by SIGINT or SIGTERM (128 + 2, the shell's convention for an interrupt).</summary>
     public const int Interrupted = 130;
 
@@ -70,6 +73,11 @@ internal static class Entry
             // the user's values, so it is reported like any other bad input.
             stderr.WriteLine($"sibyl: {e.Message}");
             return UsageError;
+        }
+        catch (ArithmeticException e)
+        {
+            stderr.WriteLine($"sibyl: the calculation failed: {e.Message}");
+            return CalculationFailed;
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {

@@ -40,7 +40,7 @@ public sealed class CosmologyModel
 
     /// <summary>Builds the model with a built-in linear spectrum: the Eisenstein &amp; Hu (1998) fit unless told otherwise.</summary>
     /// <param name="parameters">Cosmology.</param>
-    /// <param name="source">Where the linear spectrum comes from; <see cref="LinearSource.Boltzmann"/> takes 0.15–0.3 s on 2 cores.</param>
+    /// <param name="source">Where the linear spectrum comes from; <see cref="LinearSource.Boltzmann"/> takes 0.15–0.35 s on 2 cores.</param>
     /// <param name="threads">
     /// Threads of the Boltzmann solver: 0 (default) for every core, 1 inside a run that is already parallel over
     /// cosmologies. The fit ignores it.

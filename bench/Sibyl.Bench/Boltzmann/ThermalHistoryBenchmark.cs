@@ -9,7 +9,7 @@ namespace Sibyl.Bench.Boltzmann;
 /// How long does the thermal history of one cosmology take to solve, and how long one opacity look-up from
 /// the perturbation equations' right-hand side (called ~10⁶ times per spectrum)?
 /// </summary>
-[MemoryDiagnoser]
+[Config(typeof(SibylBenchConfig))]
 [MedianColumn]
 [MinColumn]
 [MaxColumn]

@@ -94,7 +94,7 @@ internal static class HelpText
         text.Append(CultureInfo.InvariantCulture, $"  {ParameterCatalog.ModelName,-11} [lcdm] one of {string.Join(", ", ParameterCatalog.Models.Keys)}\n");
         text.Append(CultureInfo.InvariantCulture, $"  {ParameterCatalog.LinearName,-11} [fit] one of {string.Join(", ", ParameterCatalog.LinearSources.Keys)}: the Eisenstein & Hu (1998) fitting formula,\n");
         text.Append("""
-                          or the built-in Einstein-Boltzmann solver (about 1 s; the only source reading N_eff
+                          or the built-in Einstein-Boltzmann solver (about 0.3 s; the only source reading N_eff
                           and Y_He). compute linear linear=boltzmann adds the fit's P_lin and P_nw and the
                           ratio P_lin/P_lin_fit, and --plot draws the two against each other
 

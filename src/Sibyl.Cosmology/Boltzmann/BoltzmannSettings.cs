@@ -33,9 +33,10 @@ public sealed record BoltzmannSettings
     public double TightCouplingWavenumberLimit { get; init; } = 0.1;
 
     /// <summary>
-    /// After tight coupling, the linearly implicit <see cref="Numerics.LinearRosenbrock2"/> integrates while the opacity
-    /// κ' exceeds this multiple of max(k, 𝓗), where an explicit step would be held to about 3/κ' by stability. With the
-    /// default tight-coupling limits κ' is at most 100 max(k, 𝓗) when the hierarchy starts, so the explicit
+    /// After tight coupling, the linearly implicit <see cref="Numerics.LinearRosenbrock2"/> integrates while the
+    /// photon–baryon slip rate (1 + R)κ' (R = 4ρ_γ/3ρ_b) exceeds this multiple of max(k, 𝓗), where an explicit step
+    /// would be held to about 3/((1 + R)κ') by stability. With the default tight-coupling limits and baryon densities
+    /// near ω_b = 0.022 that rate is below 1000 max(k, 𝓗) when the hierarchy starts, so the explicit
     /// <see cref="Numerics.DormandPrince54"/> does all the work (it is 3–20× cheaper per mode there); with tight coupling
     /// switched off (limits of 1e-5) the explicit integrator cannot finish in 10⁶ steps while the implicit one takes
     /// 0.1–0.6 s per mode.

@@ -1,3 +1,4 @@
+using System.Runtime.ExceptionServices;
 using Sibyl.Cosmology.Boltzmann.Perturbations;
 using Sibyl.Cosmology.Boltzmann.Recombination;
 
@@ -31,21 +32,30 @@ public sealed class TransferSolver
     /// <summary>δ_m(k, a = 1)/ζ for each <paramref name="k"/> in 1/Mpc.</summary>
     /// <param name="k">Wavenumbers in 1/Mpc, positive.</param>
     /// <param name="threads">Worker threads; 0 for all cores.</param>
-    /// <exception cref="ArithmeticException">A mode failed to integrate.</exception>
+    /// <exception cref="ArithmeticException">A mode failed to integrate; the message names its k. The other workers stop.</exception>
     public double[] MatterContrast(IReadOnlyList<double> k, int threads = 0)
     {
         ArgumentNullException.ThrowIfNull(k);
         var result = new double[k.Count];
         var order = Enumerable.Range(0, k.Count).OrderByDescending(i => k[i]).ToArray();
         int next = -1;
+        int failed = 0;
         int workers = Math.Clamp(threads <= 0 ? Environment.ProcessorCount : threads, 1, Math.Max(1, k.Count));
         void Work()
         {
             var solver = new ModeSolver(_background, _settings);
-            for (int j = Interlocked.Increment(ref next); j < order.Length; j = Interlocked.Increment(ref next))
+            for (int j = Interlocked.Increment(ref next); j < order.Length && Volatile.Read(ref failed) == 0; j = Interlocked.Increment(ref next))
             {
                 int i = order[j];
-                result[i] = solver.MatterContrast(k[i]);
+                try
+                {
+                    result[i] = solver.MatterContrast(k[i]);
+                }
+                catch
+                {
+                    Volatile.Write(ref failed, 1);
+                    throw;
+                }
             }
         }
 
@@ -61,7 +71,15 @@ public sealed class TransferSolver
                 tasks[w] = Task.Factory.StartNew(Work, CancellationToken.None, TaskCreationOptions.LongRunning, TaskScheduler.Default);
             }
 
-            Task.WaitAll(tasks);
+            try
+            {
+                Task.WaitAll(tasks);
+            }
+            catch (AggregateException e)
+            {
+                // Callers handle the mode's own exception (ArithmeticException), not the tasks' wrapper.
+                ExceptionDispatchInfo.Capture(e.InnerExceptions[0]).Throw();
+            }
         }
 
         return result;

@@ -14,7 +14,7 @@ public enum LinearSource
 
     /// <summary>
     /// The built-in linear Einstein–Boltzmann solver (<see cref="Boltzmann.BoltzmannLinear"/>): <c>boltzmann</c>.
-    /// About a second per cosmology; the only source that reads N_eff and Y_He.
+    /// 0.15–0.35 s per cosmology on 2 cores; the only source that reads N_eff and Y_He.
     /// </summary>
     Boltzmann,
 }

@@ -151,8 +151,9 @@ public sealed class DormandPrince54
                 next.CopyTo(y0);
                 k7.CopyTo(k1);
                 t = tNext;
-                // PI control (Hairer, Nørsett & Wanner §II.4, β = 0.04) damps the step oscillations a pure I controller shows near the stability limit.
-                double factor = 0.9 * Math.Pow(error, -0.7 / 5) * Math.Pow(previousError, 0.04);
+                // PI control (Hairer, Nørsett & Wanner §II.4: β = 0.04, α = 1/5 − 0.75β) damps the step oscillations a pure
+                // I controller shows near the stability limit.
+                double factor = 0.9 * Math.Pow(error, -0.17) * Math.Pow(previousError, 0.04);
                 previousError = Math.Max(error, 1e-4);
                 double grown = h * Math.Clamp(double.IsFinite(factor) ? factor : 5.0, 0.2, 5.0);
                 if (last)

@@ -56,7 +56,8 @@ public sealed record CosmologyParameters
 
     /// <summary>
     /// Primordial helium mass fraction Y_He; 0.2454 is the big-bang-nucleosynthesis value for ω_b ≈ 0.0224
-    /// (Planck 2018 VI, from memory). Used by the Boltzmann solver only.
+    /// (Planck 2018 VI, from memory). Used by the Boltzmann solver only. It stays fixed: it does not follow ω_b or
+    /// N_eff as nucleosynthesis would, so set it with them when varying those.
     /// </summary>
     public double HeliumFraction { get; init; } = 0.2454;
 

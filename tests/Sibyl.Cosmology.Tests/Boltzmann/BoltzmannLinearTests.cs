@@ -29,10 +29,11 @@ public class BoltzmannLinearTests
     {
         // Eisenstein & Hu (1998, ApJ 496, 605) quote (from memory) residuals of a few per cent in T(k) against
         // Boltzmann-code transfer functions for standard parameters, worst around the BAO. Both spectra share
-        // ln10As, so the ratio of transfer functions is √(P_solver/P_fit): within 4 % for 1e-4 ≤ k ≤ 1 h/Mpc, and
+        // ln10As, so the ratio of transfer functions is √(P_solver/P_fit): within 4 % for 1e-4 ≤ k ≤ 5 h/Mpc (the solver's
+        // last wavenumber), and
         // within 0.5 % on the largest scales where both reduce to the same matter-era Poisson limit.
         var (solver, fit) = Spectra.Value;
-        foreach (double k in LogGridFunction.LogGrid(1e-4, 1.0, 200))
+        foreach (double k in LogGridFunction.LogGrid(1e-4, BoltzmannLinear.SolverKMax, 200))
         {
             double transferRatio = Math.Sqrt(solver.Shape.Evaluate(k) / fit.Shape.Evaluate(k));
             Assert.InRange(transferRatio, 0.96, 1.04);
@@ -45,10 +46,12 @@ public class BoltzmannLinearTests
     public void Baryon_acoustic_peaks_are_spaced_by_two_pi_over_the_drag_sound_horizon()
     {
         // The baryon transfer function oscillates as sin(k s)/(k s) with s the sound horizon at the drag epoch
-        // (Eisenstein & Hu 1998, eq. 21–22), so successive maxima of P/P_nw sit 2π/s apart once the phase shift of
-        // the first peaks has settled. Mean spacing of the 2nd to 5th maxima within 3 % of 2π/r_drag (the residual
-        // phase drift and the filter's few-per-mille bias on peak positions stay below that).
-        var (solver, _) = Spectra.Value;
+        // (Eisenstein & Hu 1998, eqs. 21–22), so maxima of P/P_nw sit about 2π/s apart. The phase drifts as the
+        // baryon velocity term takes over from the density term at higher k (the local spacing measured here runs
+        // from 0.99 to 1.04 × 2π/r_drag between the 1st and the 6th peak), so the mean spacing of the first five maxima
+        // must lie within 2 % of 2π/r_drag: spectra whose peaks followed the fit's 3 % larger sound horizon would fail.
+        var (solver, fit) = Spectra.Value;
+        Assert.InRange(fit.BaoScale / solver.BaoScale, 1.025, 1.045);
         var maxima = new List<double>();
         double previous = double.NaN, current = double.NaN;
         foreach (double k in LogGridFunction.LogGrid(0.03, 0.4, 4000))
@@ -64,19 +67,24 @@ public class BoltzmannLinearTests
         }
 
         Assert.True(maxima.Count >= 5, $"found {maxima.Count} maxima");
-        double spacing = (maxima[4] - maxima[1]) / 3.0;
-        Assert.Equal(1.0, spacing * solver.BaoScale / (2.0 * Math.PI), 0.03);
+        double spacing = (maxima[4] - maxima[0]) / 4.0;
+        Assert.Equal(1.0, spacing * solver.BaoScale / (2.0 * Math.PI), 0.02);
     }
 
     [Fact]
-    public void Sigma8_normalisation_gives_the_requested_sigma8()
+    public void Sigma8_normalisation_reproduces_the_ln10As_spectrum_with_the_same_sigma8()
     {
-        // With σ8 set instead of ln10As the shape is rescaled so that D(1)·σ(8 Mpc/h) equals it; the top-hat
-        // variance is the same quadrature on both sides, so only rounding separates them: tolerance 1e-9.
-        var parameters = Planck with { Ln10As = null, Sigma8 = 0.8 };
-        var model = CosmologyModel.Create(parameters);
-        var spectrum = BoltzmannLinear.Compute(parameters, model.LcdmGrowthToday);
-        Assert.Equal(0.8, model.LcdmGrowthToday * Math.Sqrt(TopHat.Variance(spectrum.Shape, 8.0)), 1e-9);
+        // The two normalisations are two ways of fixing one amplitude: the σ8 of the ln10As spectrum, given back as
+        // σ8, must reproduce that spectrum. Only the top-hat quadrature's rounding separates them: 1e-9 relative.
+        var (solver, _) = Spectra.Value;
+        var model = CosmologyModel.Create(Planck);
+        double sigma8 = model.LcdmGrowthToday * Math.Sqrt(TopHat.Variance(solver.Shape, 8.0));
+        var parameters = Planck with { Ln10As = null, Sigma8 = sigma8 };
+        var rescaled = BoltzmannLinear.Compute(parameters, model.LcdmGrowthToday);
+        foreach (double k in new[] { 1e-4, 0.01, 0.1, 1.0, 10.0 })
+        {
+            Assert.Equal(1.0, rescaled.Shape.Evaluate(k) / solver.Shape.Evaluate(k), 1e-9);
+        }
     }
 
     [Fact]

@@ -32,7 +32,7 @@ public class ShippedGridTests
     [Fact]
     public void The_boltzmann_grid_trains_on_the_solver_and_stays_small()
     {
-        // About a second per point on the solver: 150 points and one redshift keep plan, run, merge and fit to a few
+        // About half a second per point on one core with the solver: 150 points and one redshift keep plan, run, merge and fit to a few
         // minutes on 2 cores.
         var spec = GridSpecReader.ReadFile(Path.Combine(Folder, "matter-boltzmann.json"));
 

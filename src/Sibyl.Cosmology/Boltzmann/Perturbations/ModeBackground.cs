@@ -62,6 +62,9 @@ public sealed class ModeBackground
     /// <summary>The background tabulated.</summary>
     public RadiationBackground Background { get; }
 
+    /// <summary>R·a = 4ρ_γ/(3ρ_b)·a, the photon-to-baryon momentum ratio at a = 1.</summary>
+    public double PhotonToBaryonToday => 4.0 / 3.0 * Background.OmegaPhoton / Background.OmegaBaryon;
+
     /// <summary>Smallest tabulated ln a.</summary>
     public double MinLnA => _lnAMin;
 

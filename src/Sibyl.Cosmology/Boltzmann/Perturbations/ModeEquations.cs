@@ -3,8 +3,9 @@ namespace Sibyl.Cosmology.Boltzmann.Perturbations;
 /// <summary>
 /// The linear equations of one Fourier mode in synchronous gauge, CDM at rest (Ma &amp; Bertschinger 1995,
 /// ApJ 455, 7, eqs. 21, 42, 49, 63–66), written with ln a as the time variable: every conformal-time derivative
-/// is divided by 𝓗. Dark energy is a smooth background (no perturbations), which changes only modes near the
-/// horizon today when w ≠ −1. Three regimes share one state layout; variables a regime does not evolve keep
+/// is divided by 𝓗. Dark energy has no perturbations, which is consistent for a cosmological constant only; the
+/// spectrum of a w0wa model is therefore taken from its Λ counterpart (see <see cref="BoltzmannLinear"/>). Three
+/// regimes share one state layout; variables a regime does not evolve keep
 /// a zero derivative.
 /// </summary>
 public sealed class ModeEquations
@@ -29,7 +30,7 @@ public sealed class ModeEquations
         _baryonWeight = 1.5 * h0Squared * b.OmegaBaryon;
         _photonWeight = 1.5 * h0Squared * b.OmegaPhoton;
         _neutrinoWeight = 1.5 * h0Squared * b.OmegaNeutrino;
-        _photonToBaryon = 4.0 / 3.0 * b.OmegaPhoton / b.OmegaBaryon;
+        _photonToBaryon = background.PhotonToBaryonToday;
         Derivative = Evaluate;
     }
 
@@ -51,7 +52,8 @@ public sealed class ModeEquations
 
     /// <summary>
     /// Curvature on uniform-density slices, ζ = −η + δρ/(3(ρ + p)) (Bardeen, Steinhardt &amp; Turner 1983;
-    /// Wands et al. 2000), conserved outside the horizon for adiabatic modes.
+    /// Wands et al. 2000), conserved outside the horizon for adiabatic modes. Valid before free streaming, which
+    /// stops evolving the radiation variables it reads.
     /// </summary>
     public double UniformDensityCurvature(double lnA, ReadOnlySpan<double> y)
     {

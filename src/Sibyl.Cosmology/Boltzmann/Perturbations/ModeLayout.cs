@@ -21,7 +21,7 @@ public sealed class ModeLayout
     /// <summary>Photon density contrast.</summary>
     public const int DeltaPhoton = 4;
 
-    /// <summary>Photon velocity divergence θ_γ.</summary>
+    /// <summary>Photon velocity divergence θ_γ, 1/Mpc.</summary>
     public const int ThetaPhoton = 5;
 
     /// <summary>F_γ2, the first photon multipole above the fluid ones.</summary>
@@ -66,7 +66,4 @@ public sealed class ModeLayout
 
     /// <summary>Index of photon multipole F_γℓ, ℓ ≥ 2.</summary>
     public int Photon(int l) => PhotonQuadrupole + l - 2;
-
-    /// <summary>Index of neutrino multipole F_νℓ, ℓ ≥ 2.</summary>
-    public int Neutrino(int l) => NeutrinoQuadrupole + l - 2;
 }

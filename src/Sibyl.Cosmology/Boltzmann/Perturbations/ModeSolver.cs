@@ -43,8 +43,11 @@ public sealed class ModeSolver
         double full = _background.FirstWhere(p => k > wavenumberLimit * p.Opacity || p.ConformalHubble > limit * p.Opacity, start);
         double streaming = _background.FirstWhere(
             p => k * p.Time > _settings.StreamingMinKTau && p.Opacity < _settings.StreamingMaxOpacity * p.ConformalHubble, full);
-        double ratio = _settings.ImplicitOpacityRatio;
-        double explicitStart = Math.Min(_background.FirstWhere(p => p.Opacity < ratio * Math.Max(k, p.ConformalHubble), full), streaming);
+        // The fastest rate of the hierarchy is the photon–baryon slip, damped at (1 + R)κ' with R = 4ρ_γ/(3ρ_b).
+        double ratio = _settings.ImplicitOpacityRatio, photonToBaryon = _background.PhotonToBaryonToday;
+        double explicitStart = Math.Min(
+            _background.FirstWhere(p => (1.0 + photonToBaryon / p.ScaleFactor) * p.Opacity < ratio * Math.Max(k, p.ConformalHubble), full),
+            streaming);
         return (start, full, explicitStart, streaming);
     }
 
@@ -52,11 +55,19 @@ public sealed class ModeSolver
     /// The matter density contrast δ_m(k) in the CDM frame at <paramref name="lnAEnd"/> for ζ = 1 initially,
     /// <paramref name="k"/> in 1/Mpc.
     /// </summary>
-    /// <exception cref="ArithmeticException">The integration failed.</exception>
+    /// <exception cref="ArithmeticException">The integration failed; the message names k.</exception>
     public double MatterContrast(double k, double lnAEnd = 0.0)
     {
         var equations = new ModeEquations(_background, _layout, k);
-        Evolve(equations, k, lnAEnd, _state);
+        try
+        {
+            Evolve(equations, k, lnAEnd, _state);
+        }
+        catch (ArithmeticException e)
+        {
+            throw new ArithmeticException($"Boltzmann mode k = {k:G6}/Mpc: {e.Message}", e);
+        }
+
         return equations.MatterContrast(_state);
     }
 
@@ -66,7 +77,11 @@ public sealed class ModeSolver
         ArgumentNullException.ThrowIfNull(equations);
         var (start, full, explicitStart, streaming) = Schedule(k);
         equations.InitialConditions(start, state);
-        double tolerance = _settings.RelativeTolerance, absolute = 1e-3 * tolerance;
+        // ζ = 1 sets the scale of η; the densities start at O((kτ)²) of it, so the absolute tolerance follows them down
+        // for modes that start far outside the horizon (k τ_start < 1 when the start is held at a = 1e-6).
+        _background.At(start, out var first);
+        double kt = Math.Min(1.0, k * first.Time);
+        double tolerance = _settings.RelativeTolerance, absolute = 1e-3 * tolerance * kt * kt;
         double step = 1e-3;
         int n = _layout.Dimension;
 

@@ -49,12 +49,12 @@ public static class PhysicalConstants
 
     /// <summary>
     /// Ionisation energy of hydrogen from 1s in J: 13.598434 eV. This is the Rydberg energy 13.605693 eV times
-    /// the reduced-mass factor 1/(1 + m_e/m_p), the same factor that puts Lyα at 121.5682 nm.
+    /// the reduced-mass factor 1/(1 + m_e/m_p), the same factor that puts Lyα at 121.567 nm (3/4 of it: hc / 10.1988 eV).
     /// </summary>
     public const double HydrogenIonization = 13.598434 * ElectronVolt;
 
     /// <summary>Wavelength of hydrogen Lyα (2p → 1s) in m.</summary>
-    public const double LymanAlphaWavelength = 121.5682e-9;
+    public const double LymanAlphaWavelength = 121.5670e-9;
 
     /// <summary>Energy of hydrogen Lyα, the 1s → 2 excitation energy, in J.</summary>
     public const double LymanAlphaEnergy = PlanckConstant * SpeedOfLight / LymanAlphaWavelength;
