@@ -122,6 +122,8 @@ internal static class HelpText
               --basis    compute galaxy: also write every basis term (one column each)
               --help     this text
 
+            exit codes: 0 done, 2 bad input, 5 the calculation failed (the message names the mode)
+
             """);
         return text.ToString();
     }

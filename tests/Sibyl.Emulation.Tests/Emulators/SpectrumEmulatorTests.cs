@@ -130,6 +130,8 @@ public sealed class SpectrumEmulatorTests(SmallEmulatorFixture fixture)
         double[] point = [0.12, 0.8];
         var values = new double[size];
         var gradient = new double[size * d];
+        // Warm both overloads first: their first calls may allocate while the runtime compiles and initialises them.
+        predictor.Predict(point);
         predictor.Predict(point, 1, values, [], gradient);
         long before = GC.GetAllocatedBytesForCurrentThread();
         for (int i = 0; i < 10; i++)
