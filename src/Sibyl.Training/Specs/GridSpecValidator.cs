@@ -1,5 +1,6 @@
 using System.Globalization;
 using System.Text.RegularExpressions;
+using Sibyl.Cosmology.Boltzmann;
 using Sibyl.Cosmology.Linear;
 using Sibyl.Cosmology.Parameters;
 using Sibyl.Perturbation.Loops;
@@ -178,9 +179,14 @@ internal static partial class GridSpecValidator
 
             try
             {
-                GridPoint.Cosmology(spec, corner);
+                var cosmology = GridPoint.Cosmology(spec, corner);
+                if (spec.UsesBoltzmann)
+                {
+                    // The solver's background adds radiation, so matter near Ω_m = 1 or an N_eff outside its range fails there.
+                    _ = new RadiationBackground(cosmology);
+                }
             }
-            catch (ParameterOutOfRangeException e)
+            catch (Exception e) when (e is ParameterOutOfRangeException or ArgumentOutOfRangeException)
             {
                 string at = string.Join(", ", spec.Varied.Select((v, c) => string.Create(CultureInfo.InvariantCulture, $"{v.Name}={corner[c]:G}")));
                 problems.Add($"vary: the box holds invalid cosmologies; at the corner {at}: {e.Message.Split(" (Parameter '")[0]}");

@@ -75,6 +75,7 @@ public class LinearSourceSpecTests
     [InlineData("linear=\"boltzmann\"|fixed.N_eff=-1", "fixed.N_eff: -1 is outside the allowed range [0, 10]")]
     [InlineData("linear=\"boltzmann\"|k={\"values\": [0.1, 20]}", "k[1]: 20 h/Mpc is outside [0.0001, 10]")]
     [InlineData("linear=\"boltzmann\"|k={\"values\": [5e-5, 0.1]}", "k[0]: 5E-05 h/Mpc is outside [0.0001, 10]")]
+    [InlineData("linear=\"boltzmann\"|vary.h=[0.3, 0.31]|fixed.omega_b=0.0001|vary.omega_cdm=[0.05, 0.08989]", "matter and radiation exceed the critical density")]
     public void Each_invalid_linear_choice_is_refused_with_a_problem_naming_its_field(string edits, string problem)
     {
         var e = Assert.Throws<GridSpecException>(() => GridSpecReader.Parse(SpecText.With(edits.Split('|')), "grid.json"));
