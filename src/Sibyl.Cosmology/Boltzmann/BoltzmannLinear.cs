@@ -46,9 +46,8 @@ public static class BoltzmannLinear
         var contrast = solver.MatterContrast(nodes.Select(k => k * h).ToArray(), threads);
 
         // Normalise with A_s = 1e-9 first; ln10As or σ8 fixes the amplitude below.
-        var fit = LinearSpectrumFactory.FromFittingFormula(parameters, lcdmGrowthToday);
-        double pivot = LinearSpectrumFactory.PivotScale, growthSquared = lcdmGrowthToday * lcdmGrowthToday;
-        double counterpartGrowthSquared = counterpartGrowth * counterpartGrowth;
+        var fitShape = LinearSpectrumFactory.FittingFormulaShape(parameters, lcdmGrowthToday);
+        double pivot = LinearSpectrumFactory.PivotScale, counterpartGrowthSquared = counterpartGrowth * counterpartGrowth;
         double scalarAmplitude = parameters.Ln10As is { } lnAs ? Math.Exp(lnAs) * 1e-10 : 1e-9;
         var lnK = new double[nodes.Count];
         var lnRatio = new double[nodes.Count];
@@ -58,27 +57,22 @@ public static class BoltzmannLinear
             double power = 2.0 * Math.PI * Math.PI / (k * k * k) * scalarAmplitude * Math.Pow(k / pivot, parameters.SpectralIndex - 1.0)
                            * contrast[i] * contrast[i] * h * h * h / counterpartGrowthSquared;
             lnK[i] = Math.Log(nodes[i]);
-            lnRatio[i] = Math.Log(power / fit.Shape.Evaluate(nodes[i]));
+            lnRatio[i] = Math.Log(power / fitShape.Evaluate(nodes[i]));
         }
 
         var ratio = CubicSpline.InterpolateNatural(lnK, lnRatio);
         double lnKFirst = lnK[0], lnKLast = lnK[^1];
         var shape = LogGridFunction.Sample(
-            k => fit.Shape.Evaluate(k) * Math.Exp(ratio.Interpolate(Math.Clamp(Math.Log(k), lnKFirst, lnKLast))),
+            k => fitShape.Evaluate(k) * Math.Exp(ratio.Interpolate(Math.Clamp(Math.Log(k), lnKFirst, lnKLast))),
             LinearSpectrumFactory.DefaultKMin,
             LinearSpectrumFactory.DefaultKMax,
             LinearSpectrumFactory.GridPoints);
         if (parameters.Ln10As is null)
         {
-            double sigma8 = parameters.Sigma8 ?? throw new ArgumentException("either ln10As or sigma8 must be set", nameof(parameters));
-            double variance = TopHat.Variance(shape, 8.0) * growthSquared;
-            shape = shape.Scaled(sigma8 * sigma8 / variance);
+            shape = LinearSpectrumFactory.ScaledToSigma8(parameters, shape, lcdmGrowthToday);
         }
 
-        var eh = new EisensteinHu(parameters.OmegaBaryon, parameters.OmegaCdm, h, parameters.CmbTemperature);
-        double ns = parameters.SpectralIndex;
-        var noWiggle = NoWiggleSplit.Split(shape, k => Math.Pow(k, ns) * Square(eh.NoWiggleTransfer(k * h)));
-        return new LinearSpectrum(shape, noWiggle, solver.Thermal.SoundHorizonAtDrag * h, "Boltzmann solver");
+        return LinearSpectrumFactory.WithNoWiggle(parameters, shape, solver.Thermal.SoundHorizonAtDrag * h, "Boltzmann solver");
     }
 
     private static double[] BuildNodes()
@@ -101,6 +95,4 @@ public static class BoltzmannLinear
 
         return [.. nodes];
     }
-
-    private static double Square(double x) => x * x;
 }

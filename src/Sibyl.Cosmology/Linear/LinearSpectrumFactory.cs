@@ -26,13 +26,52 @@ public static class LinearSpectrumFactory
     public static LinearSpectrum FromFittingFormula(CosmologyParameters parameters, double lcdmGrowthToday)
     {
         ArgumentNullException.ThrowIfNull(parameters);
-        var fit = new EisensteinHu(parameters.OmegaBaryon, parameters.OmegaCdm, parameters.H, parameters.CmbTemperature);
+        var fit = Fit(parameters);
+        return WithNoWiggle(parameters, FittingFormulaShape(parameters, lcdmGrowthToday), fit.SoundHorizon * parameters.H, "Eisenstein & Hu (1998) fit");
+    }
+
+    /// <summary>The Eisenstein &amp; Hu (1998) shape alone on the default grid, normalised by ln10As or σ8, in (Mpc/h)³.</summary>
+    /// <param name="parameters">Cosmology.</param>
+    /// <param name="lcdmGrowthToday">D(a = 1) of the general-relativity counterpart, in the D → a convention.</param>
+    public static LogGridFunction FittingFormulaShape(CosmologyParameters parameters, double lcdmGrowthToday)
+    {
+        ArgumentNullException.ThrowIfNull(parameters);
+        var fit = Fit(parameters);
         double h = parameters.H, ns = parameters.SpectralIndex;
         var shape = LogGridFunction.Sample(k => Math.Pow(k, ns) * Square(fit.Transfer(k * h)), DefaultKMin, DefaultKMax, GridPoints);
-        double amplitude = Amplitude(parameters, shape, lcdmGrowthToday);
-        shape = shape.Scaled(amplitude);
+        return parameters.Ln10As is { } lnAs
+            ? shape.Scaled(ScalarAmplitudeFactor(parameters, lnAs))
+            : ScaledToSigma8(parameters, shape, lcdmGrowthToday);
+    }
+
+    /// <summary>
+    /// <paramref name="shape"/> rescaled so that D(1)·σ(8 Mpc/h) equals the parameters' σ8.
+    /// </summary>
+    /// <exception cref="ArgumentException">σ8 is not set.</exception>
+    public static LogGridFunction ScaledToSigma8(CosmologyParameters parameters, LogGridFunction shape, double lcdmGrowthToday)
+    {
+        ArgumentNullException.ThrowIfNull(parameters);
+        ArgumentNullException.ThrowIfNull(shape);
+        double sigma8 = parameters.Sigma8 ?? throw new ArgumentException("either ln10As or sigma8 must be set", nameof(parameters));
+        double variance = TopHat.Variance(shape, 8.0) * lcdmGrowthToday * lcdmGrowthToday;
+        return shape.Scaled(sigma8 * sigma8 / variance);
+    }
+
+    /// <summary>
+    /// A linear spectrum from a shape in growth units: the no-wiggle partner comes from <see cref="NoWiggleSplit"/>
+    /// against the Eisenstein &amp; Hu (1998) zero-baryon form, the same for every source.
+    /// </summary>
+    /// <param name="parameters">Cosmology (for the smooth reference).</param>
+    /// <param name="shape">Shape(k) in (Mpc/h)³ on a log grid.</param>
+    /// <param name="baoScale">Sound horizon at the drag epoch in Mpc/h.</param>
+    /// <param name="source">Where the shape came from, for reports.</param>
+    public static LinearSpectrum WithNoWiggle(CosmologyParameters parameters, LogGridFunction shape, double baoScale, string source)
+    {
+        ArgumentNullException.ThrowIfNull(parameters);
+        var fit = Fit(parameters);
+        double h = parameters.H, ns = parameters.SpectralIndex;
         var noWiggle = NoWiggleSplit.Split(shape, k => Math.Pow(k, ns) * Square(fit.NoWiggleTransfer(k * h)));
-        return new LinearSpectrum(shape, noWiggle, fit.SoundHorizon * h, "Eisenstein & Hu (1998) fit");
+        return new LinearSpectrum(shape, noWiggle, baoScale, source);
     }
 
     /// <summary>
@@ -85,28 +124,22 @@ public static class LinearSpectrumFactory
         double kMin = Math.Max(k[0], Math.Max(rangeMin, DefaultKMin)), kMax = Math.Min(k[^1], Math.Min(rangeMax, DefaultKMax));
         double growthSquared = lcdmGrowthToday * lcdmGrowthToday;
         var shape = LogGridFunction.Sample(q => Math.Exp(spline.Interpolate(Math.Log(q))) / growthSquared, kMin, kMax, GridPoints);
-        var fit = new EisensteinHu(parameters.OmegaBaryon, parameters.OmegaCdm, parameters.H, parameters.CmbTemperature);
-        double h = parameters.H, ns = parameters.SpectralIndex;
-        var noWiggle = NoWiggleSplit.Split(shape, q => Math.Pow(q, ns) * Square(fit.NoWiggleTransfer(q * h)));
-        return new LinearSpectrum(shape, noWiggle, fit.SoundHorizon * h, "user table");
+        return WithNoWiggle(parameters, shape, Fit(parameters).SoundHorizon * parameters.H, "user table");
     }
 
-    private static double Amplitude(CosmologyParameters p, LogGridFunction shape, double lcdmGrowthToday)
+    /// <summary>
+    /// Φ = −(3/5)ℛ in matter domination and Poisson's equation give, with D → a,
+    /// P(k) = (8π²/25) A_s (k/k_p)^{n_s−1} T²(k) k (c/H0)⁴ / Ω_m²; the shape already holds k^{n_s} T².
+    /// </summary>
+    private static double ScalarAmplitudeFactor(CosmologyParameters p, double lnAs)
     {
-        if (p.Ln10As is { } lnAs)
-        {
-            // Φ = −(3/5)ℛ in matter domination and Poisson's equation give, with D → a,
-            // P(k) = (8π²/25) A_s (k/k_p)^{n_s−1} T²(k) k (c/H0)⁴ / Ω_m²; the shape already holds k^{n_s} T².
-            double asValue = Math.Exp(lnAs) * 1e-10;
-            double pivot = PivotScale / p.H;
-            return 8.0 * Math.PI * Math.PI / 25.0 * asValue * Math.Pow(pivot, 1.0 - p.SpectralIndex)
-                   * Math.Pow(HubbleDistance, 4) / (p.OmegaMatter * p.OmegaMatter);
-        }
-
-        double sigma8 = p.Sigma8 ?? throw new ArgumentException("either ln10As or sigma8 must be set", nameof(p));
-        double variance = TopHat.Variance(shape, 8.0) * lcdmGrowthToday * lcdmGrowthToday;
-        return sigma8 * sigma8 / variance;
+        double asValue = Math.Exp(lnAs) * 1e-10;
+        double pivot = PivotScale / p.H;
+        return 8.0 * Math.PI * Math.PI / 25.0 * asValue * Math.Pow(pivot, 1.0 - p.SpectralIndex)
+               * Math.Pow(HubbleDistance, 4) / (p.OmegaMatter * p.OmegaMatter);
     }
+
+    private static EisensteinHu Fit(CosmologyParameters p) => new(p.OmegaBaryon, p.OmegaCdm, p.H, p.CmbTemperature);
 
     private static double Square(double x) => x * x;
 }

@@ -6,21 +6,21 @@ namespace Sibyl.Cosmology.Numerics;
 /// 1456). ROS2 keeps order 2 for any matrix in place of the Jacobian (a W-method), so A is taken once per step at its
 /// start, and the time dependence needs no ∂f/∂t term. For a homogeneous linear system column j of A is exactly
 /// F(t, e_j), so the Jacobian costs n evaluations and no differencing error. The error estimate is the difference
-/// to the embedded first-order solution y + h k₁. Buffers are made once; integrating allocates nothing.
+/// to the embedded first-order solution y + h k₁.
 /// </summary>
-public sealed class LinearRosenbrock2
+public sealed class LinearRosenbrock2 : AdaptiveIntegrator
 {
     private static readonly double Gamma = 1.0 + 1.0 / Math.Sqrt(2.0);
 
-    private readonly int _capacity;
-    private readonly double[] _jacobian, _matrix, _k1, _k2, _stage, _unit, _column;
+    private readonly double[] _jacobian, _matrix, _k1, _k2, _stage, _unit, _column, _error;
     private readonly int[] _pivots;
+    private int _dimension;
+    private bool _jacobianCurrent;
 
-    /// <summary>Creates an integrator for systems of up to <paramref name="dimension"/> equations.</summary>
+    /// <summary>Creates an integrator for systems of up to <paramref name="dimension"/> equations, linear and homogeneous in y.</summary>
     public LinearRosenbrock2(int dimension)
+        : base(dimension)
     {
-        ArgumentOutOfRangeException.ThrowIfLessThan(dimension, 1);
-        _capacity = dimension;
         _jacobian = new double[dimension * dimension];
         _matrix = new double[dimension * dimension];
         _k1 = new double[dimension];
@@ -28,112 +28,63 @@ public sealed class LinearRosenbrock2
         _stage = new double[dimension];
         _unit = new double[dimension];
         _column = new double[dimension];
+        _error = new double[dimension];
         _pivots = new int[dimension];
     }
 
-    /// <summary>
-    /// Advances the first <paramref name="dimension"/> components of <paramref name="y"/> from <paramref name="t0"/> to
-    /// <paramref name="t1"/>; the right-hand side must be linear and homogeneous in y. Error control as in
-    /// <see cref="DormandPrince54.Integrate"/>.
-    /// </summary>
-    /// <exception cref="ArithmeticException">The step underflows, the matrix is singular, the state stops being finite, or the step budget runs out.</exception>
-    public void Integrate(
-        OdeRightHandSide rhs,
-        Span<double> y,
-        int dimension,
-        double t0,
-        double t1,
-        ref double step,
-        double relativeTolerance,
-        double absoluteTolerance,
-        int maxSteps = 1_000_000)
-    {
-        ArgumentNullException.ThrowIfNull(rhs);
-        ArgumentOutOfRangeException.ThrowIfGreaterThan(dimension, _capacity);
-        if (!(t1 > t0))
-        {
-            return;
-        }
+    /// <inheritdoc/>
+    protected override ReadOnlySpan<double> ErrorEstimate => _error.AsSpan(0, _dimension);
 
-        int n = dimension;
-        var state = y[..n];
+    /// <inheritdoc/>
+    protected override void Begin(OdeRightHandSide rhs, double t, ReadOnlySpan<double> y)
+    {
+        _dimension = y.Length;
+        _jacobianCurrent = false;
+    }
+
+    /// <inheritdoc/>
+    /// <exception cref="ArithmeticException">The stage matrix I − γhA is singular.</exception>
+    protected override void Attempt(OdeRightHandSide rhs, double t, double tNext, ReadOnlySpan<double> y, Span<double> next)
+    {
+        int n = _dimension;
+        double h = tNext - t;
         var k1 = _k1.AsSpan(0, n);
         var k2 = _k2.AsSpan(0, n);
         var stage = _stage.AsSpan(0, n);
-        double t = t0, h = Math.Min(Math.Abs(step), t1 - t0);
-        bool jacobianCurrent = false;
-        for (int attempts = 0; ; attempts++)
+        if (!_jacobianCurrent)
         {
-            if (attempts >= maxSteps)
-            {
-                throw new ArithmeticException($"the implicit integration used {maxSteps} steps between t = {t0:G6} and {t1:G6} without finishing (stopped at {t:G6})");
-            }
+            Jacobian(rhs, t, n);
+            _jacobianCurrent = true;
+        }
 
-            bool last = t + h >= t1;
-            if (last)
-            {
-                h = t1 - t;
-            }
+        Factor(n, h);
+        rhs(t, y, k1);
+        Solve(n, k1);
+        for (int i = 0; i < n; i++)
+        {
+            stage[i] = y[i] + h * k1[i];
+        }
 
-            if (!jacobianCurrent)
-            {
-                Jacobian(rhs, t, n);
-                jacobianCurrent = true;
-            }
+        rhs(tNext, stage, k2);
+        for (int i = 0; i < n; i++)
+        {
+            k2[i] -= 2.0 * k1[i];
+        }
 
-            Factor(n, h);
-            rhs(t, state, k1);
-            Solve(n, k1);
-            for (int i = 0; i < n; i++)
-            {
-                stage[i] = state[i] + h * k1[i];
-            }
-
-            double tNext = last ? t1 : t + h;
-            rhs(tNext, stage, k2);
-            for (int i = 0; i < n; i++)
-            {
-                k2[i] -= 2.0 * k1[i];
-            }
-
-            Solve(n, k2);
-            double sum = 0.0;
-            for (int i = 0; i < n; i++)
-            {
-                double next = state[i] + h * (1.5 * k1[i] + 0.5 * k2[i]);
-                double scale = absoluteTolerance + relativeTolerance * Math.Max(Math.Abs(state[i]), Math.Abs(next));
-                double r = 0.5 * h * (k1[i] + k2[i]) / scale;
-                sum += r * r;
-                stage[i] = next;
-            }
-
-            double error = Math.Sqrt(sum / n);
-            if (!double.IsFinite(error))
-            {
-                throw new ArithmeticException($"the state stopped being finite at t = {t:G6}");
-            }
-
-            // An order-1 error estimate: the step scales as error^(−1/2).
-            double factor = Math.Clamp(0.9 / Math.Sqrt(Math.Max(error, 1e-10)), 0.2, 4.0);
-            if (error <= 1.0)
-            {
-                stage.CopyTo(state);
-                t = tNext;
-                jacobianCurrent = false;
-                if (last)
-                {
-                    step = h * factor;
-                    return;
-                }
-            }
-
-            h *= factor;
-            if (h < 1e-14 * Math.Max(Math.Abs(t), 1.0))
-            {
-                throw new ArithmeticException($"the implicit step underflowed at t = {t:G6}");
-            }
+        Solve(n, k2);
+        for (int i = 0; i < n; i++)
+        {
+            next[i] = y[i] + h * (1.5 * k1[i] + 0.5 * k2[i]);
+            _error[i] = 0.5 * h * (k1[i] + k2[i]);
         }
     }
+
+    /// <inheritdoc/>
+    /// <remarks>An order-1 error estimate: the step scales as error^(−1/2).</remarks>
+    protected override double StepFactor(double error, bool accepted) => Math.Clamp(0.9 / Math.Sqrt(Math.Max(error, 1e-10)), 0.2, 4.0);
+
+    /// <inheritdoc/>
+    protected override void Accepted() => _jacobianCurrent = false;
 
     /// <summary>Column j of A(t) is F(t, e_j), exact for a linear homogeneous right-hand side.</summary>
     private void Jacobian(OdeRightHandSide rhs, double t, int n)

@@ -40,6 +40,13 @@ public sealed class ModeLayout
         Dimension = NeutrinoQuadrupole + neutrinoMultipoles - 1;
     }
 
+    /// <summary>The layout of the hierarchies <paramref name="settings"/> ask for.</summary>
+    public static ModeLayout For(BoltzmannSettings settings)
+    {
+        ArgumentNullException.ThrowIfNull(settings);
+        return new ModeLayout(settings.PhotonMultipoles, settings.PolarizationMultipoles, settings.NeutrinoMultipoles);
+    }
+
     /// <summary>Photon ℓmax.</summary>
     public int PhotonMultipoles { get; }
 

@@ -25,7 +25,7 @@ public sealed class ModeSolver
         settings.Validate();
         _background = background;
         _settings = settings;
-        _layout = new ModeLayout(settings.PhotonMultipoles, settings.PolarizationMultipoles, settings.NeutrinoMultipoles);
+        _layout = ModeLayout.For(settings);
         _integrator = new DormandPrince54(_layout.Dimension);
         _implicitIntegrator = new LinearRosenbrock2(_layout.Dimension);
         _state = new double[_layout.Dimension];
