@@ -1,6 +1,5 @@
 using Sibyl.Cli.Arguments;
 using Sibyl.Cli.Commands;
-using Sibyl.Cosmology.Parameters;
 using Sibyl.Training.Runs;
 using Sibyl.Training.Specs;
 using Sibyl.Training.Storage;
@@ -60,11 +59,6 @@ internal static class Entry
         {
             // Bad input files: the message already names the file and every problem.
             stderr.WriteLine($"sibyl: {e.Message}");
-            return UsageError;
-        }
-        catch (ParameterOutOfRangeException e)
-        {
-            stderr.WriteLine($"sibyl: {e.Message.Split(" (Parameter '")[0]}");
             return UsageError;
         }
         catch (ArgumentException e)

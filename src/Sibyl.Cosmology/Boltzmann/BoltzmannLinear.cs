@@ -29,7 +29,8 @@ public static class BoltzmannLinear
     /// <param name="lcdmGrowthToday">D(a = 1) of the general-relativity counterpart, in the D → a convention.</param>
     /// <param name="threads">Worker threads for the k modes; 0 for all cores, 1 inside an already parallel training run.</param>
     /// <param name="settings">Accuracy settings; null for the defaults.</param>
-    /// <exception cref="ArgumentOutOfRangeException">A parameter the solver reads is outside its range (N_eff, Y_He, a closed budget).</exception>
+    /// <exception cref="ParameterOutOfRangeException">N_eff is outside its range or matter and radiation exceed the critical density.</exception>
+    /// <exception cref="ArgumentOutOfRangeException">Y_He is outside (0, 0.5).</exception>
     /// <exception cref="ArithmeticException">A mode failed to integrate.</exception>
     public static LinearSpectrum Compute(CosmologyParameters parameters, double lcdmGrowthToday, int threads = 0, BoltzmannSettings? settings = null)
     {

@@ -1,3 +1,4 @@
+using System.Globalization;
 using Sibyl.Cosmology.Parameters;
 
 namespace Sibyl.Cosmology.Boltzmann;
@@ -23,13 +24,13 @@ public sealed class RadiationBackground
     public static readonly double NeutrinoPerPhoton = 7.0 / 8.0 * Math.Pow(4.0 / 11.0, 4.0 / 3.0);
 
     /// <summary>Builds the background of <paramref name="parameters"/>.</summary>
-    /// <exception cref="ArgumentOutOfRangeException">N_eff is negative or the dark-energy density would be negative.</exception>
+    /// <exception cref="ParameterOutOfRangeException">N_eff is outside [0, 10] or matter and radiation leave no room for dark energy.</exception>
     public RadiationBackground(CosmologyParameters parameters)
     {
         ArgumentNullException.ThrowIfNull(parameters);
         if (!(parameters.NEff >= 0.0 && parameters.NEff <= 10.0))
         {
-            throw new ArgumentOutOfRangeException(nameof(parameters), parameters.NEff, "N_eff must lie in [0, 10]");
+            throw new ParameterOutOfRangeException("N_eff", string.Create(CultureInfo.InvariantCulture, $"must lie in [0, 10], got {parameters.NEff:G}"));
         }
 
         double h2 = parameters.H * parameters.H;
@@ -42,7 +43,9 @@ public sealed class RadiationBackground
         OmegaDarkEnergy = 1.0 - OmegaPhoton - OmegaNeutrino - OmegaBaryon - OmegaCdm;
         if (!(OmegaDarkEnergy >= 0.0))
         {
-            throw new ArgumentOutOfRangeException(nameof(parameters), OmegaDarkEnergy, "matter and radiation exceed the critical density");
+            throw new ParameterOutOfRangeException(
+                "omega_cdm",
+                string.Create(CultureInfo.InvariantCulture, $"matter and radiation exceed the critical density (Omega_m + Omega_r = {1.0 - OmegaDarkEnergy:G6}); the solver's flat universe needs room for both"));
         }
 
         W0 = parameters.W0;

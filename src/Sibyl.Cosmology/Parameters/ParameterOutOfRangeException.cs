@@ -10,8 +10,15 @@ public sealed class ParameterOutOfRangeException : ArgumentException
         : base($"{name}: {problem}", name)
     {
         Name = name;
+        Message = $"{name}: {problem}";
     }
 
     /// <summary>The offending parameter, as users write it.</summary>
     public string Name { get; }
+
+    /// <summary>
+    /// "name: problem", without the " (Parameter 'name')" suffix <see cref="ArgumentException"/> appends: the name already
+    /// leads the text, and the CLI, the run log and the server show it to users as it is.
+    /// </summary>
+    public override string Message { get; }
 }

@@ -23,8 +23,7 @@ internal static class StatusMapping
             ParameterOutOfRangeException => StatusCode.OutOfRange,
             _ => StatusCode.InvalidArgument,
         };
-        string message = e is ParameterOutOfRangeException ? e.Message.Split(" (Parameter '")[0] : e.Message;
-        return new RpcException(new Status(code, prefix + message));
+        return new RpcException(new Status(code, prefix + e.Message));
     }
 
     public static RequestRejectedException Invalid(string message) => new(StatusCode.InvalidArgument, message);

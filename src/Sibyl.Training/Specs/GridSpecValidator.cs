@@ -186,10 +186,10 @@ internal static partial class GridSpecValidator
                     _ = new RadiationBackground(cosmology);
                 }
             }
-            catch (Exception e) when (e is ParameterOutOfRangeException or ArgumentOutOfRangeException)
+            catch (ParameterOutOfRangeException e)
             {
                 string at = string.Join(", ", spec.Varied.Select((v, c) => string.Create(CultureInfo.InvariantCulture, $"{v.Name}={corner[c]:G}")));
-                problems.Add($"vary: the box holds invalid cosmologies; at the corner {at}: {e.Message.Split(" (Parameter '")[0]}");
+                problems.Add($"vary: the box holds invalid cosmologies; at the corner {at}: {e.Message}");
                 return;
             }
         }
