@@ -135,7 +135,7 @@ public static class GaussianProcessRegression
                     CultureInfo.InvariantCulture,
                     $"The covariance matrix is not numerically positive definite at noise variance {hyperparameters.NoiseVariance:R}; raise it."),
                 nameof(hyperparameters));
-        return GaussianProcessModel.Own(
+        return new GaussianProcessModel(
             likelihood.Kernel, hyperparameters, inputs.ToRowMajorArray(), state.Alpha, outputMean, outputScale,
             keepCholeskyFactor ? state.Factor : null, state.Value);
     }
