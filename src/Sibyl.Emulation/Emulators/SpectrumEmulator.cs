@@ -181,6 +181,8 @@ public sealed class SpectrumEmulator
     /// <exception cref="ParameterOutOfRangeException">z is not one of the trained redshifts.</exception>
     public int SliceOf(double z)
     {
+        // z reaches here as a double a client may have computed (0.1 + 0.2 misses 0.3 by 6e-17): 1e-9 absorbs such
+        // round-off yet is far below any useful spacing of trained redshifts; absolute below z = 1 so that z = 0 matches.
         for (int s = 0; s < _contract.Redshifts.Length; s++)
         {
             if (Math.Abs(_contract.Redshifts[s] - z) <= 1e-9 * Math.Max(1.0, z))

@@ -71,6 +71,8 @@ public sealed class AccuracyReport
     {
         double worst = 0.0;
         var p99 = Curve(term, 99);
+
+        // A grid k meant to be kMax but built by arithmetic can exceed it by an ulp; 1e-12 relative keeps it in.
         for (int i = 0; i < K.Count && K[i] <= kMax * (1 + 1e-12); i++)
         {
             worst = Math.Max(worst, p99[i]);
