@@ -10,7 +10,7 @@ namespace Sibyl.Bench.Emulators;
 /// <summary>
 /// In-process prediction of one spectrum (both matter basis terms at 40 k values) from an emulator with 1000 training
 /// points and 8 parameters (the quasi-static model's box: h, ω_b, ω_cdm, n_s, ln10As, z, mu0, vertex2), as fitted by
-/// default (4 leading components per term with their own process, the rest sharing one). DESIGN.md target: ≤ 5 µs
+/// default (the leading component per term with its own process, the rest sharing one). DESIGN.md target: ≤ 5 µs
 /// for the mean. The setup computes the 1000-point training set directly and fits with a short hyperparameter search
 /// (prediction cost does not depend on how well the hyperparameters were optimised).
 /// </summary>

@@ -79,7 +79,8 @@ public static class EmulatorFitter
             InputWarps = [.. warps.Select(w => (int)w)],
         };
         var emulator = new SpectrumEmulator(contract, "new emulator");
-        return emulator.WithAccuracy(Validate(emulator, set, heldOut));
+        emulator.RecordAccuracy(Validate(emulator, set, heldOut));
+        return emulator;
     }
 
     /// <summary>Compares the emulator with the training set's held-out points at every slice.</summary>

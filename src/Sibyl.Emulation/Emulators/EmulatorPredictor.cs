@@ -45,9 +45,6 @@ public sealed class EmulatorPredictor
         _spectra = new BasisSpectra(emulator.Layout, [.. emulator.K], _values);
     }
 
-    /// <summary>The emulator this predictor evaluates.</summary>
-    public SpectrumEmulator Emulator => _emulator;
-
     /// <summary>
     /// The mean basis spectra at <paramref name="parameters"/> (in <see cref="SpectrumEmulator.ParameterNames"/> order),
     /// redshift slice <paramref name="slice"/>. The returned object is this predictor's buffer, overwritten by the next call.

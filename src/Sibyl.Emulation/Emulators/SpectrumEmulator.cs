@@ -60,6 +60,7 @@ public sealed class SpectrumEmulator
             p.OutputScale,
             p.Cholesky,
             p.LogMarginalLikelihood))];
+        HasVariance = Processes.All(p => p.HasCholeskyFactor);
         Trends = [.. contract.Processes.Select(p => new QuadraticTrend(p.TrendDegree, d, p.OutputMean.Length, p.TrendCoefficients))];
         var covered = new bool[Blocks.Sum(b => b.Count)];
         int[] offsets = [.. Blocks.Select((b, i) => Blocks.Take(i).Sum(x => x.Count))];
@@ -92,21 +93,6 @@ public sealed class SpectrumEmulator
         Warps = [.. contract.InputWarps.Select(w => Enum.IsDefined((InputWarp)w) ? (InputWarp)w : throw new CorruptFileException(source, "unknown input warp"))];
     }
 
-    /// <summary>The same fitted parts with another accuracy record (the fitter measures it on the emulator itself).</summary>
-    private SpectrumEmulator(SpectrumEmulator fitted, EmulatorContract contract, AccuracyReport accuracy)
-    {
-        _contract = contract;
-        Spec = fitted.Spec;
-        SliceCount = fitted.SliceCount;
-        Layout = fitted.Layout;
-        Blocks = fitted.Blocks;
-        Transforms = fitted.Transforms;
-        Warps = fitted.Warps;
-        Processes = fitted.Processes;
-        Trends = fitted.Trends;
-        Accuracy = accuracy;
-    }
-
     /// <summary>The grid spec of the training set.</summary>
     public GridSpec Spec { get; }
 
@@ -132,7 +118,7 @@ public sealed class SpectrumEmulator
     public BasisLayout Layout { get; }
 
     /// <summary>Accuracy measured on the held-out points at fit time.</summary>
-    public AccuracyReport Accuracy { get; }
+    public AccuracyReport Accuracy { get; private set; }
 
     /// <summary>Hash of the design of the training set.</summary>
     public string DesignHash => _contract.DesignHash;
@@ -144,7 +130,7 @@ public sealed class SpectrumEmulator
     public int TrainingCount => _contract.TrainingInputs.Length / ParameterNames.Count;
 
     /// <summary>True when predictive variances are available.</summary>
-    public bool HasVariance => Processes.All(p => p.HasCholeskyFactor);
+    public bool HasVariance { get; }
 
     internal PrincipalComponents[] Blocks { get; }
 
@@ -177,14 +163,15 @@ public sealed class SpectrumEmulator
     }
 
     /// <summary>
-    /// This emulator carrying <paramref name="accuracy"/> as its measured accuracy, sharing every fitted part (the
-    /// Cholesky factors alone are n² numbers per process). For the fitter only, before the first instance is handed out:
-    /// both instances share the stored form, whose accuracy record this replaces.
+    /// Replaces the placeholder accuracy with <paramref name="accuracy"/>, in memory and in the stored form. In place
+    /// because the fitter can only measure accuracy on the emulator itself, and a copy would either rebuild every
+    /// fitted part (the Cholesky factors alone are n² numbers per process) or repeat this constructor field by field.
+    /// For the fitter only, before the emulator is handed out, so that it is immutable to everyone else.
     /// </summary>
-    internal SpectrumEmulator WithAccuracy(AccuracyReport accuracy)
+    internal void RecordAccuracy(AccuracyReport accuracy)
     {
         _contract.Accuracy = accuracy.Contract;
-        return new SpectrumEmulator(this, _contract, accuracy);
+        Accuracy = accuracy;
     }
 
     /// <summary>A predictor with its own buffers; make one per thread.</summary>
@@ -194,6 +181,8 @@ public sealed class SpectrumEmulator
     /// <exception cref="ParameterOutOfRangeException">z is not one of the trained redshifts.</exception>
     public int SliceOf(double z)
     {
+        // z reaches here as a double a client may have computed (0.1 + 0.2 misses 0.3 by 6e-17): 1e-9 absorbs such
+        // round-off yet is far below any useful spacing of trained redshifts; absolute below z = 1 so that z = 0 matches.
         for (int s = 0; s < _contract.Redshifts.Length; s++)
         {
             if (Math.Abs(_contract.Redshifts[s] - z) <= 1e-9 * Math.Max(1.0, z))

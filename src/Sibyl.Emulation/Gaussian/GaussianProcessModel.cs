@@ -20,7 +20,8 @@ public sealed class GaussianProcessModel
     private readonly double[] _outputScale;
     private readonly double[]? _cholesky;
 
-    private GaussianProcessModel(
+    /// <summary>Wraps arrays without copying: the caller has just built them and must not touch them again.</summary>
+    internal GaussianProcessModel(
         KernelKind kernel,
         GaussianProcessHyperparameters hyperparameters,
         double[] inputs,
@@ -187,16 +188,4 @@ public sealed class GaussianProcessModel
     /// <summary>A new predictor with its own scratch buffers (about 3n doubles); make one per thread.</summary>
     /// <returns>A predictor bound to this model.</returns>
     public GaussianProcessPredictor CreatePredictor() => new(this);
-
-    /// <summary>Wraps arrays the caller has just built and will not touch again.</summary>
-    internal static GaussianProcessModel Own(
-        KernelKind kernel,
-        GaussianProcessHyperparameters hyperparameters,
-        double[] inputs,
-        double[] alpha,
-        double[] outputMean,
-        double[] outputScale,
-        double[]? cholesky,
-        double logMarginalLikelihood) =>
-        new(kernel, hyperparameters, inputs, alpha, outputMean, outputScale, cholesky, logMarginalLikelihood);
 }

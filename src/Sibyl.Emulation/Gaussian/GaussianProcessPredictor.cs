@@ -29,9 +29,6 @@ public sealed class GaussianProcessPredictor
         _work = new double[model.PaddedCount];
     }
 
-    /// <summary>The model this predictor evaluates.</summary>
-    public GaussianProcessModel Model => _model;
-
     /// <summary>Posterior mean of every output (R&amp;W 2006 eq. 2.25: k*ᵀα, unstandardized), in output units.</summary>
     /// <param name="input">The point, length d, in the unit box of the training inputs; all finite.</param>
     /// <param name="mean">Receives the m means.</param>

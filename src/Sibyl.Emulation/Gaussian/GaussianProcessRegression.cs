@@ -1,5 +1,6 @@
 using System.Globalization;
 using MathNet.Numerics.LinearAlgebra;
+using Sibyl.Training.Design;
 
 namespace Sibyl.Emulation.Gaussian;
 
@@ -68,12 +69,12 @@ public static class GaussianProcessRegression
         }
 
         var optimiser = new LimitedMemoryBfgs();
-        var random = new SplitMix64(options.Seed);
+        var random = new SeededRandom(options.Seed);
         double[]? best = null;
         double bestValue = double.NegativeInfinity;
         for (int start = 0; start <= options.Restarts; start++)
         {
-            double[] initial = start == 0 ? InitialPoint(options, d) : RandomPoint(ref random, d);
+            double[] initial = start == 0 ? InitialPoint(options, d) : RandomPoint(random, d);
             Clamp(initial, lower, upper, initial);
             RaiseNoiseUntilDefined(likelihood, initial, upper[^1]);
             (double[] x, _, _) = optimiser.Minimize(Objective, initial, options.MaximumIterations);
@@ -134,7 +135,7 @@ public static class GaussianProcessRegression
                     CultureInfo.InvariantCulture,
                     $"The covariance matrix is not numerically positive definite at noise variance {hyperparameters.NoiseVariance:R}; raise it."),
                 nameof(hyperparameters));
-        return GaussianProcessModel.Own(
+        return new GaussianProcessModel(
             likelihood.Kernel, hyperparameters, inputs.ToRowMajorArray(), state.Alpha, outputMean, outputScale,
             keepCholeskyFactor ? state.Factor : null, state.Value);
     }
@@ -215,20 +216,20 @@ public static class GaussianProcessRegression
         options.Initial?.ToLogParameters()
         ?? new GaussianProcessHyperparameters(1.0, Enumerable.Repeat(DefaultLengthScale, d).ToArray(), DefaultNoiseVariance).ToLogParameters();
 
-    private static double[] RandomPoint(ref SplitMix64 random, int d)
+    private static double[] RandomPoint(SeededRandom random, int d)
     {
         var theta = new double[d + 2];
-        theta[0] = Uniform(ref random, Math.Log(0.3), Math.Log(3.0));
+        theta[0] = Uniform(random, Math.Log(0.3), Math.Log(3.0));
         for (int q = 1; q <= d; q++)
         {
-            theta[q] = Uniform(ref random, Math.Log(0.1), Math.Log(3.0));
+            theta[q] = Uniform(random, Math.Log(0.1), Math.Log(3.0));
         }
 
-        theta[^1] = Uniform(ref random, Math.Log(1e-8), Math.Log(1e-4));
+        theta[^1] = Uniform(random, Math.Log(1e-8), Math.Log(1e-4));
         return theta;
     }
 
-    private static double Uniform(ref SplitMix64 random, double low, double high) => low + ((high - low) * random.NextDouble());
+    private static double Uniform(SeededRandom random, double low, double high) => low + ((high - low) * random.NextDouble());
 
     private static void Clamp(ReadOnlySpan<double> theta, double[] lower, double[] upper, Span<double> destination)
     {

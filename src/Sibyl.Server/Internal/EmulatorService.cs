@@ -1,4 +1,3 @@
-using System.Collections.Concurrent;
 using Grpc.Core;
 using Microsoft.Extensions.Logging;
 using Sibyl.V1;
@@ -57,22 +56,33 @@ internal sealed class EmulatorService(EmulatorCatalog catalog, ILogger<EmulatorS
         }
 
         var replies = new PredictReply[points.Count];
-        var failures = new ConcurrentBag<(int Index, Exception Error)>();
+        (int Index, Exception Error)? failure;
         if (points.Count <= ChunkSize)
         {
-            PredictRange(points, replies, 0, points.Count, failures);
+            failure = PredictRange(points, replies, 0, points.Count, state: null);
         }
         else
         {
-            Parallel.ForEach(
-                Partitioner.Create(0, points.Count, ChunkSize),
+            // One slot per chunk, written only by the thread running that chunk, so no concurrent collection is needed.
+            // Break (not Stop) lets every chunk below a failing one finish, so the lowest break is the lowest bad point.
+            var failures = new (int Index, Exception Error)?[(points.Count + ChunkSize - 1) / ChunkSize];
+            var result = Parallel.For(
+                0,
+                failures.Length,
                 new ParallelOptions { CancellationToken = context.CancellationToken },
-                range => PredictRange(points, replies, range.Item1, range.Item2, failures));
+                (chunk, state) =>
+                {
+                    failures[chunk] = PredictRange(points, replies, chunk * ChunkSize, Math.Min(points.Count, (chunk + 1) * ChunkSize), state);
+                    if (failures[chunk] is not null)
+                    {
+                        state.Break();
+                    }
+                });
+            failure = result.LowestBreakIteration is long lowest ? failures[lowest] : null;
         }
 
-        if (!failures.IsEmpty)
+        if (failure is (int index, Exception error))
         {
-            var (index, error) = failures.MinBy(f => f.Index);
             throw Refuse(nameof(PredictBatch), error, $"point {index}: ");
         }
 
@@ -110,10 +120,17 @@ internal sealed class EmulatorService(EmulatorCatalog catalog, ILogger<EmulatorS
         }
     }
 
-    private void PredictRange(IList<PredictRequest> points, PredictReply[] replies, int start, int end, ConcurrentBag<(int Index, Exception Error)> failures)
+    /// <summary>Predicts points [start, end) into <paramref name="replies"/>; returns the first bad point, if any.</summary>
+    private (int Index, Exception Error)? PredictRange(IList<PredictRequest> points, PredictReply[] replies, int start, int end, ParallelLoopState? state)
     {
         for (int i = start; i < end; i++)
         {
+            // A chunk above a failed one is wasted work: the reply will be the error, and only a lower point can change it.
+            if (state is { ShouldExitCurrentIteration: true })
+            {
+                return null;
+            }
+
             try
             {
                 replies[i] = catalog.Find(points[i].Emulator).Predict(points[i]);
@@ -121,10 +138,11 @@ internal sealed class EmulatorService(EmulatorCatalog catalog, ILogger<EmulatorS
             catch (Exception e) when (StatusMapping.IsRequestError(e))
             {
                 // Only the first bad point of a chunk matters: the reply names the lowest one of all chunks.
-                failures.Add((i, e));
-                return;
+                return (i, e);
             }
         }
+
+        return null;
     }
 
     private RpcException Refuse(string method, Exception error, string prefix)

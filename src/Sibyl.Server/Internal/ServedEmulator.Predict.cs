@@ -201,6 +201,8 @@ internal sealed partial class ServedEmulator
             throw StatusMapping.Invalid($"k: {k.Count} values requested, at most {MaxKValues} per request");
         }
 
+        // A client that rebuilds the grid's ends (say from a log spacing) can miss them by a few ulp; 1e-12 relative
+        // admits that and nothing meant as outside, and the spline clamps such a k onto the end knot.
         double low = _k[0] * (1.0 - 1e-12), high = _k[^1] * (1.0 + 1e-12);
         w.EnsureOutput(k.Count, Emulator.ParameterNames.Count, _termNames.Length);
         for (int j = 0; j < k.Count; j++)

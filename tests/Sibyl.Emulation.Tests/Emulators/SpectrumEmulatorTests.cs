@@ -98,6 +98,9 @@ public sealed class SpectrumEmulatorTests(SmallEmulatorFixture fixture)
         predictor.Predict(fixture.Set.Parameters(training), 0, values, atTraining, []);
         predictor.Predict([_emulator.Min[0], _emulator.Min[1]], 0, values, outside, []);
         Assert.All(atTraining, v => Assert.True(v >= 0.0));
+
+        // How large the ratio is depends on how far the design's nearest points lie from the box corner, so the test
+        // asks only for clear growth (a factor 10), not for a value.
         Assert.True(outside.Sum() > 10 * atTraining.Sum());
     }
 
