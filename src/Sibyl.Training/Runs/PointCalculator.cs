@@ -50,6 +50,14 @@ public sealed class PointCalculator
     /// <summary>Numbers per point: redshifts × terms × k values.</summary>
     public int ValuesPerPoint { get; }
 
+    /// <summary>
+    /// True when <paramref name="exception"/>, thrown by <see cref="Compute(int, CancellationToken)"/>, means that this
+    /// point failed (parameters the physics refuses, a non-finite result, the user's linear program failing) and its
+    /// message is meant for the user; anything else is a fault of the program or the machine.
+    /// </summary>
+    public static bool IsPointFailure(Exception exception) =>
+        exception is ArgumentException or ArithmeticException or InvalidOperationException or ExternalLinearException;
+
     /// <summary>Computes point <paramref name="index"/>.</summary>
     /// <exception cref="Exception">Anything the calculation or the user's linear program throws; the run records it.</exception>
     public double[] Compute(int index, CancellationToken cancellation)
