@@ -17,17 +17,20 @@ public static class LoopRange
     public const double RelativeTolerance = 1e-12;
 
     /// <summary>
-    /// Describes the first problem with the output wavenumbers <paramref name="k"/> (h/Mpc) for the table range
-    /// [<paramref name="qMin"/>, <paramref name="qMax"/>] (h/Mpc), or returns null when there is none. The rule:
-    /// k is non-empty, finite, positive, strictly increasing and within [qMin·<see cref="LoopQuadrature.RangeMargin"/>,
+    /// Finds the first problem with the output wavenumbers <paramref name="k"/> (h/Mpc) for the table range
+    /// [<paramref name="qMin"/>, <paramref name="qMax"/>] (h/Mpc). The rule: k is non-empty, finite, positive,
+    /// strictly increasing and within [qMin·<see cref="LoopQuadrature.RangeMargin"/>,
     /// qMax/<see cref="LoopQuadrature.RangeMargin"/>] to <see cref="RelativeTolerance"/>.
     /// </summary>
-    /// <returns>A message naming the offending index and value, starting with "k[i]: " or "k: "; null if k is valid.</returns>
-    public static string? WavenumberProblem(ReadOnlySpan<double> k, double qMin, double qMax)
+    /// <returns>
+    /// Null when k is valid; otherwise the offending index (−1 for an empty grid) and the problem, which starts with
+    /// the offending value, so that each caller can name k[i] in its own style.
+    /// </returns>
+    public static (int Index, string Problem)? FindWavenumberProblem(ReadOnlySpan<double> k, double qMin, double qMax)
     {
         if (k.IsEmpty)
         {
-            return "k: at least one output wavenumber is needed";
+            return (-1, "At least one output wavenumber is needed.");
         }
 
         double lowest = qMin * LoopQuadrature.RangeMargin;
@@ -37,19 +40,19 @@ public static class LoopRange
             double value = k[i];
             if (!double.IsFinite(value) || value <= 0.0)
             {
-                return string.Create(CultureInfo.InvariantCulture, $"k[{i}]: {value:G} must be finite and positive");
+                return (i, string.Create(CultureInfo.InvariantCulture, $"{value:G} must be finite and positive"));
             }
 
             if (i > 0 && value <= k[i - 1])
             {
-                return string.Create(CultureInfo.InvariantCulture, $"k[{i}]: {value:G} does not exceed k[{i - 1}] = {k[i - 1]:G}; the k grid must increase strictly");
+                return (i, string.Create(CultureInfo.InvariantCulture, $"{value:G} does not exceed k[{i - 1}] = {k[i - 1]:G}; the k grid must increase strictly"));
             }
 
             if (value < lowest * (1 - RelativeTolerance) || value > highest * (1 + RelativeTolerance))
             {
-                return string.Create(
+                return (i, string.Create(
                     CultureInfo.InvariantCulture,
-                    $"k[{i}]: {value:G} h/Mpc is outside [{lowest:G}, {highest:G}], a factor {LoopQuadrature.RangeMargin:G} inside the table range [{qMin:G}, {qMax:G}] the loops integrate over");
+                    $"{value:G} h/Mpc is outside [{lowest:G}, {highest:G}], a factor {LoopQuadrature.RangeMargin:G} inside the table range [{qMin:G}, {qMax:G}] the loops integrate over"));
             }
         }
 

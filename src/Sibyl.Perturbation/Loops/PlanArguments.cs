@@ -26,12 +26,12 @@ internal static class PlanArguments
         }
     }
 
-    /// <summary>Throws unless <see cref="LoopRange.WavenumberProblem"/> finds no problem with k.</summary>
+    /// <summary>Throws unless <see cref="LoopRange.FindWavenumberProblem"/> finds no problem with k.</summary>
     public static void ValidateWavenumbers(ReadOnlySpan<double> k, double qMin, double qMax)
     {
-        if (LoopRange.WavenumberProblem(k, qMin, qMax) is { } problem)
+        if (LoopRange.FindWavenumberProblem(k, qMin, qMax) is (int index, string problem))
         {
-            throw new ArgumentException(problem, nameof(k));
+            throw new ArgumentException(index < 0 ? problem : $"k[{index}] = {problem}.", nameof(k));
         }
     }
 

@@ -203,9 +203,9 @@ internal static partial class GridSpecValidator
         }
 
         // The plans' own rule, so that a spec accepted here is never refused when the run builds them.
-        if (LoopRange.WavenumberProblem(spec.K.ToArray(), spec.LinearKMin, spec.LinearKMax) is { } problem)
+        if (LoopRange.FindWavenumberProblem(spec.K.ToArray(), spec.LinearKMin, spec.LinearKMax) is (int index, string problem))
         {
-            problems.Add(problem);
+            problems.Add($"k[{index}]: {problem}");
             return;
         }
 
