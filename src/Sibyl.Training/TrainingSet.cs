@@ -65,9 +65,6 @@ public sealed class TrainingSet
     /// <summary>The error of a failed point, or null.</summary>
     public string? Error(int index) => _contract.Errors[index];
 
-    /// <summary>Redshifts of point <paramref name="index"/>.</summary>
-    public double[] Redshifts(int index) => GridPoint.Redshifts(Spec, Parameters(index));
-
     /// <summary>Every value of point <paramref name="index"/>: redshift-major, then term-major over k.</summary>
     /// <exception cref="InvalidOperationException">The point failed.</exception>
     public ReadOnlySpan<double> Values(int index) =>

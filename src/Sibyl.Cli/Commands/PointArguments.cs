@@ -70,7 +70,7 @@ internal sealed record PointArguments(CosmologyModel Model, double Redshift, dou
     public void RequireLoopRange()
     {
         double low = Model.Linear.KMin * LoopQuadrature.RangeMargin, high = Model.Linear.KMax / LoopQuadrature.RangeMargin;
-        if (K[0] < low * (1 - 1e-12) || K[^1] > high * (1 + 1e-12))
+        if (K[0] < low * (1 - LoopRange.RelativeTolerance) || K[^1] > high * (1 + LoopRange.RelativeTolerance))
         {
             throw new UsageException(string.Create(
                 CultureInfo.InvariantCulture,

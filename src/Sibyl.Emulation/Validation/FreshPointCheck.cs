@@ -42,7 +42,7 @@ public static class FreshPointCheck
                 Comparison.AtEverySlice(emulator, predictors.Value!, i, design.Point(i), calculator.Compute(i, CancellationToken.None))
                     .CopyTo(comparisons, i * emulator.SliceCount);
             }
-            catch (Exception e) when (e is ArgumentException or ArithmeticException or InvalidOperationException or Training.Linear.ExternalLinearException)
+            catch (Exception e) when (PointCalculator.IsPointFailure(e))
             {
                 failures?.Invoke($"point {i}: {e.Message}");
             }

@@ -147,9 +147,9 @@ public sealed class LogSampledSpectrum
             + (w2 * System.Runtime.CompilerServices.Unsafe.Add(ref v, 2)) + (w3 * System.Runtime.CompilerServices.Unsafe.Add(ref v, 3));
     }
 
-    /// <summary>True when this table spans [<paramref name="qMin"/>, <paramref name="qMax"/>] (h/Mpc) to 1e-12 relative.</summary>
+    /// <summary>True when this table spans [<paramref name="qMin"/>, <paramref name="qMax"/>] (h/Mpc) to <see cref="LoopRange.RelativeTolerance"/>.</summary>
     internal bool HasSameRangeAs(double qMin, double qMax) =>
-        Math.Abs(qMin - QMin) <= 1e-12 * QMin && Math.Abs(qMax - QMax) <= 1e-12 * QMax;
+        Math.Abs(qMin - QMin) <= LoopRange.RelativeTolerance * QMin && Math.Abs(qMax - QMax) <= LoopRange.RelativeTolerance * QMax;
 
     private static void ValidateGeometry(double qMin, double qMax, int count)
     {

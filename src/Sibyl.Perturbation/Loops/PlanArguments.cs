@@ -26,37 +26,12 @@ internal static class PlanArguments
         }
     }
 
-    /// <summary>Throws unless k is non-empty, finite, positive, strictly increasing and within the range less the margin.</summary>
+    /// <summary>Throws unless <see cref="LoopRange.FindWavenumberProblem"/> finds no problem with k.</summary>
     public static void ValidateWavenumbers(ReadOnlySpan<double> k, double qMin, double qMax)
     {
-        if (k.IsEmpty)
+        if (LoopRange.FindWavenumberProblem(k, qMin, qMax) is (int index, string problem))
         {
-            throw new ArgumentException("At least one output wavenumber is needed.", nameof(k));
-        }
-
-        double lowest = qMin * LoopQuadrature.RangeMargin;
-        double highest = qMax / LoopQuadrature.RangeMargin;
-        for (int i = 0; i < k.Length; i++)
-        {
-            double value = k[i];
-            if (!double.IsFinite(value) || value <= 0.0)
-            {
-                throw new ArgumentException(string.Create(CultureInfo.InvariantCulture, $"k[{i}] = {value:R} h/Mpc must be finite and positive."), nameof(k));
-            }
-
-            if (value < lowest || value > highest)
-            {
-                throw new ArgumentException(
-                    string.Create(CultureInfo.InvariantCulture, $"k[{i}] = {value:R} h/Mpc lies outside [{lowest:R}, {highest:R}], the table range [{qMin:R}, {qMax:R}] less a factor {LoopQuadrature.RangeMargin:R} margin."),
-                    nameof(k));
-            }
-
-            if (i > 0 && value <= k[i - 1])
-            {
-                throw new ArgumentException(
-                    string.Create(CultureInfo.InvariantCulture, $"k[{i}] = {value:R} h/Mpc does not exceed k[{i - 1}] = {k[i - 1]:R}: the grid must be strictly increasing."),
-                    nameof(k));
-            }
+            throw new ArgumentException(index < 0 ? problem : $"k[{index}] = {problem}.", nameof(k));
         }
     }
 

@@ -26,8 +26,7 @@ public static class MaximinImprovement
             throw new ArgumentException($"design holds {design.Length} values, not {points} × {dimensions}", nameof(design));
         }
 
-        double sum = PairSum(design, points, dimensions);
-        double before = Phi(sum);
+        double before = Phi(PairSum(design, points, dimensions));
         if (points < 3)
         {
             return (before, before);
@@ -47,17 +46,13 @@ public static class MaximinImprovement
             double old = RowSum(design, points, dimensions, first, second) + RowSum(design, points, dimensions, second, first);
             Swap(design, dimensions, column, first, second);
             double proposed = RowSum(design, points, dimensions, first, second) + RowSum(design, points, dimensions, second, first);
-            if (proposed < old)
-            {
-                sum += proposed - old;
-            }
-            else
+            // Only a swap that lowers the sum is kept (a NaN sum never is).
+            if (!(proposed < old))
             {
                 Swap(design, dimensions, column, first, second);
             }
         }
 
-        // Recomputed from scratch so that rounding in the running sum cannot drift into the reported value.
         return (before, Phi(PairSum(design, points, dimensions)));
     }
 

@@ -3,6 +3,7 @@ using System.Globalization;
 using System.Text;
 using System.Text.Json;
 using Sibyl.Cosmology.Parameters;
+using Sibyl.Perturbation.Loops;
 using Sibyl.Training.Specs;
 
 namespace Sibyl.Training.Linear;
@@ -128,7 +129,10 @@ public sealed class ExternalLinearProvider
             throw new ExternalLinearException(e.Message);
         }
 
-        if (table.K[0] > _command.KMin * (1 + 1e-9) || table.K[^1] < _command.KMax * (1 - 1e-9))
+        // The plans require the resampled table to span [k_min, k_max] to LoopRange.RelativeTolerance; a looser slack
+        // here would pass a table that then fails every point at the plans' range check.
+        double slack = LoopRange.RelativeTolerance;
+        if (table.K[0] > _command.KMin * (1 + slack) || table.K[^1] < _command.KMax * (1 - slack))
         {
             throw new ExternalLinearException(string.Create(
                 CultureInfo.InvariantCulture,

@@ -10,24 +10,36 @@ using Sibyl.Training.Specs;
 namespace Sibyl.Training.Runs;
 
 /// <summary>
-/// The direct calculation of one design point: every basis term over the spec's k grid at each of the point's
+/// The direct calculation of one point of a spec's box (a design point or any other): every basis term over the spec's k grid at each of the point's
 /// redshifts, as one array (redshift-major, then term-major, then k). The quadrature plans depend only on the
 /// k grid and the linear table range, so they are built once and shared by all threads (they keep no state
 /// between calls); the loop integrals of a point's linear spectrum are computed once and reused for each redshift.
 /// </summary>
 public sealed class PointCalculator
 {
-    private readonly TrainingDesign _design;
+    private readonly TrainingDesign? _design;
+    private readonly GridSpec _spec;
     private readonly OneLoopMatter? _matter;
     private readonly OneLoopGalaxy? _galaxy;
     private readonly ExternalLinearProvider? _provider;
 
-    /// <summary>Builds the plans for <paramref name="design"/>'s k grid.</summary>
+    /// <summary>Builds the plans for <paramref name="design"/>'s k grid; points are then computed by index.</summary>
+    /// <exception cref="ArgumentException">The spec's k grid does not fit its linear table range.</exception>
     public PointCalculator(TrainingDesign design)
+        : this((design ?? throw new ArgumentNullException(nameof(design))).Spec)
     {
-        ArgumentNullException.ThrowIfNull(design);
         _design = design;
-        var spec = design.Spec;
+    }
+
+    /// <summary>
+    /// Builds the plans for <paramref name="spec"/>'s k grid, for points of its box given by their coordinates
+    /// (<see cref="Compute(ReadOnlySpan{double}, int, CancellationToken)"/>) rather than a design's index.
+    /// </summary>
+    /// <exception cref="ArgumentException">The spec's k grid does not fit its linear table range.</exception>
+    public PointCalculator(GridSpec spec)
+    {
+        ArgumentNullException.ThrowIfNull(spec);
+        _spec = spec;
         var k = spec.K.ToArray();
         double qMin = spec.LinearKMin, qMax = spec.LinearKMax;
         if (spec.Output == OutputKind.Matter)
@@ -50,12 +62,42 @@ public sealed class PointCalculator
     /// <summary>Numbers per point: redshifts × terms × k values.</summary>
     public int ValuesPerPoint { get; }
 
-    /// <summary>Computes point <paramref name="index"/>.</summary>
+    /// <summary>
+    /// True when <paramref name="exception"/>, thrown by <see cref="Compute(int, CancellationToken)"/>, means that this
+    /// point failed (parameters the physics refuses, a non-finite result, the user's linear program failing) and its
+    /// message is meant for the user; anything else is a fault of the program or the machine.
+    /// </summary>
+    public static bool IsPointFailure(Exception exception) =>
+        exception is ArgumentException or ArithmeticException or InvalidOperationException or ExternalLinearException;
+
+    /// <summary>Computes point <paramref name="index"/> of the design.</summary>
+    /// <exception cref="InvalidOperationException">This calculator was built from a spec, without a design.</exception>
     /// <exception cref="Exception">Anything the calculation or the user's linear program throws; the run records it.</exception>
     public double[] Compute(int index, CancellationToken cancellation)
     {
-        var spec = _design.Spec;
-        var varied = _design.Point(index);
+        var design = _design ?? throw new InvalidOperationException("this calculator was built from a spec alone; give the point's coordinates");
+        return Compute(design.Point(index), index, cancellation);
+    }
+
+    /// <summary>
+    /// Computes the point of the spec's box at <paramref name="varied"/> (values of the varied parameters in the
+    /// spec's order, in their own units) exactly as a training run computes a design point: the spec's linear source
+    /// (built-in or the user's program) and table range, and every redshift of the point.
+    /// </summary>
+    /// <param name="varied">Coordinates of the point, one per varied parameter.</param>
+    /// <param name="pointIndex">The number sent to a user's linear program as "point": the design index for a design
+    /// point, otherwise any label that helps the program's own logs.</param>
+    /// <param name="cancellation">Stops a user's linear program.</param>
+    /// <returns>Redshift-major, then term-major, then k values, <see cref="ValuesPerPoint"/> numbers.</returns>
+    /// <exception cref="Exception">Anything the calculation or the user's linear program throws (see <see cref="IsPointFailure"/>).</exception>
+    public double[] Compute(ReadOnlySpan<double> varied, int pointIndex, CancellationToken cancellation)
+    {
+        var spec = _spec;
+        if (varied.Length != spec.Varied.Count)
+        {
+            throw new ArgumentException($"the spec varies {spec.Varied.Count} parameters, not {varied.Length}", nameof(varied));
+        }
+
         var parameters = GridPoint.Cosmology(spec, varied);
         CosmologyModel model;
         if (_provider is null)
@@ -65,7 +107,7 @@ public sealed class PointCalculator
         }
         else
         {
-            var (k, p) = _provider.Fetch(parameters, index, cancellation);
+            var (k, p) = _provider.Fetch(parameters, pointIndex, cancellation);
             model = CosmologyModel.CreateFromTable(parameters, k, p, spec.Linear!.KMin, spec.Linear.KMax);
         }
 

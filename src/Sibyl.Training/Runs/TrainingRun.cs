@@ -138,7 +138,7 @@ public sealed class TrainingRun
             }
             catch (Exception e) when (e is not OperationCanceledException || !cancellation.IsCancellationRequested)
             {
-                errors[i - start] = e is ArgumentException or ArithmeticException or Linear.ExternalLinearException or InvalidOperationException
+                errors[i - start] = PointCalculator.IsPointFailure(e)
                     ? e.Message.Split(" (Parameter '")[0]
                     : $"{e.GetType().Name}: {e.Message}";
             }

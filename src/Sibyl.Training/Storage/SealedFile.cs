@@ -86,7 +86,7 @@ public static class SealedFile
             throw new CorruptFileException(source, "corrupted: the data do not match the checksum in the header");
         }
 
-        return new SealedPayload(version, bytes.AsMemory(HeaderLength), Convert.ToHexStringLower(span.Slice(24, 32)));
+        return new SealedPayload(bytes.AsMemory(HeaderLength), Convert.ToHexStringLower(span.Slice(24, 32)));
     }
 
     private static string Tag(FileKind kind) => kind switch

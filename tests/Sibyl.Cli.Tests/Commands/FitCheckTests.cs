@@ -20,6 +20,10 @@ public sealed class FitCheckTests
         Assert.Contains("P_tree_plus_loop,relative,", File.ReadAllText(folder.File("grid-heldout.txt")), StringComparison.Ordinal);
         Assert.True(new FileInfo(folder.File("grid-heldout.png")).Length > 1000);
 
+        // A 30-point GP over a 2-parameter box reproduces this smooth grid closely: measured 99th-percentile errors at
+        // the 6 fresh points (seed derived from the emulator, so the same each run) are 1.2e-5 relative on both terms,
+        // 2.0e-5 on the 8 held-out points. The 1% bound leaves a factor ~800, so it fails only if the check compares
+        // the wrong values (a shifted k, term or redshift gives errors of order one), not through the fit's own noise.
         var check = CliRun.Of("check", folder.File("grid.emulator"), "--points", "6", "--max-error", "0.01");
         Assert.Equal(0, check.ExitCode);
         Assert.Contains("over 6 fresh direct-run points", check.Stderr, StringComparison.Ordinal);

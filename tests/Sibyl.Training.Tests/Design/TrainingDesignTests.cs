@@ -67,6 +67,10 @@ public class TrainingDesignTests
         // Recomputed from the stored points; only the summation order differs: 1e-12 relative.
         var training = Strata.Block(design, 0, 30);
         Assert.Equal(MaximinImprovement.Criterion(training, 30, 2), design.CriterionAfter, design.CriterionAfter * 1e-12);
+
+        // Against the definition computed independently (square root and Math.Pow, not the library's repeated
+        // multiplication): a few 1e-16 per term over 435 positive terms, shrunk by the 1/20 power; 1e-12 relative.
+        Assert.Equal(MorrisMitchell.Phi(training, 30, 2, MaximinImprovement.Exponent), design.CriterionAfter, design.CriterionAfter * 1e-12);
     }
 
     [Fact]

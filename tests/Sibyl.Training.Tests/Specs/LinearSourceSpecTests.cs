@@ -1,5 +1,7 @@
+using System.Globalization;
 using Sibyl.Cosmology;
 using Sibyl.Cosmology.Linear;
+using Sibyl.Perturbation.Loops;
 using Sibyl.Perturbation.Matter;
 using Sibyl.Training.Design;
 using Sibyl.Training.Runs;
@@ -83,6 +85,32 @@ public class LinearSourceSpecTests
         Assert.Contains(e.Problems, p => p.Contains(problem, StringComparison.Ordinal));
     }
 
+    [Theory]
+    [InlineData(3e-4, true)]
+    [InlineData(2.99e-4, false)]
+    public void A_k_at_the_loop_bound_gets_the_same_verdict_from_the_spec_check_and_the_run_plans(double kFirst, bool accepted)
+    {
+        // The case is only meaningful because 3e-5 · 10 rounds to 3.0000000000000003e-4, above the 3e-4 written in the grid.
+        const double kMin = 3e-5, kMax = 50;
+        Assert.True(kMin * LoopQuadrature.RangeMargin > 3e-4);
+        string[] edits =
+        [
+            string.Create(CultureInfo.InvariantCulture, $"linear={{\"command\": [\"unused\"], \"k_min\": {kMin:R}, \"k_max\": {kMax:R}}}"),
+            string.Create(CultureInfo.InvariantCulture, $"k={{\"values\": [{kFirst:R}, 0.1]}}"),
+        ];
+
+        bool specAccepts = Accepts(() => SpecText.Spec(edits));
+        bool plansAccept = Accepts(() => new OneLoopMatter([kFirst, 0.1], kMin, kMax));
+
+        Assert.Equal(accepted, specAccepts);
+        Assert.Equal(accepted, plansAccept);
+        if (accepted)
+        {
+            // The run builds its plans from the spec exactly as here; this is where the refusal used to surface.
+            _ = new PointCalculator(TrainingDesign.Create(SpecText.Spec(edits)));
+        }
+    }
+
     [Fact]
     public void The_solver_table_spans_the_fit_range_so_the_same_k_limits_apply()
     {
@@ -129,5 +157,18 @@ public class LinearSourceSpecTests
         }
 
         Assert.NotEqual(fit[offset], values[offset]);
+    }
+
+    private static bool Accepts(Action build)
+    {
+        try
+        {
+            build();
+            return true;
+        }
+        catch (Exception e) when (e is GridSpecException or ArgumentException)
+        {
+            return false;
+        }
     }
 }

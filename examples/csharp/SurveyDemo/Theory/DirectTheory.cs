@@ -1,20 +1,20 @@
-using Sibyl.Cosmology;
-using Sibyl.Perturbation.RedshiftSpace;
 using Sibyl.Perturbation.Spectra;
-using Sibyl.Perturbation.TimeDependence;
+using Sibyl.Training.Runs;
 using Sibyl.Training.Specs;
 
 namespace Sibyl.Demo.Theory;
 
 /// <summary>
-/// The direct one-loop calculation (<see cref="OneLoopGalaxy"/>) for the cosmologies of a grid spec's box: the same
-/// fixed parameters, gravity model, k grid and built-in linear source (fit or Boltzmann solver) as the emulator's
-/// training points (<see cref="GridPoint.Cosmology"/>), so the two theories differ only by the emulation error.
+/// The direct one-loop calculation for the cosmologies of a grid spec's box, by the training run's own
+/// <see cref="PointCalculator"/>: the same fixed parameters, gravity model, k grid, linear source (fit, Boltzmann
+/// solver or the user's program) and linear table range as the emulator's training points, so the two theories
+/// differ only by the emulation error.
 /// </summary>
 public sealed class DirectTheory : ISpectrumTheory
 {
     private readonly GridSpec _spec;
-    private readonly OneLoopGalaxy _galaxy;
+    private readonly PointCalculator _calculator;
+    private readonly int _redshiftIndex;
 
     /// <summary>Builds the cosmology-independent plans for the spec's k grid.</summary>
     /// <param name="spec">A galaxy grid spec at fixed redshifts.</param>
@@ -29,7 +29,8 @@ public sealed class DirectTheory : ISpectrumTheory
         }
 
         _spec = spec;
-        _galaxy = new OneLoopGalaxy([.. spec.K]);
+        _calculator = new PointCalculator(spec);
+        _redshiftIndex = spec.Redshifts.Select((z, i) => (z, i)).First(p => Math.Abs(p.z - redshift) < 1e-9).i;
         ParameterNames = [.. spec.Varied.Select(v => v.Name)];
         Min = [.. spec.Varied.Select(v => v.Min)];
         Max = [.. spec.Varied.Select(v => v.Max)];
@@ -60,18 +61,16 @@ public sealed class DirectTheory : ISpectrumTheory
         ArgumentNullException.ThrowIfNull(points);
         var results = new BasisSpectra[points.Count];
         var options = new ParallelOptions { CancellationToken = cancellation };
-        Parallel.For(0, points.Count, options, i => results[i] = Compute(points[i]));
+        Parallel.For(0, points.Count, options, i => results[i] = Compute(points[i], i, cancellation));
         return Task.FromResult(results);
     }
 
-    /// <summary>One cosmology: linear spectrum, loop integrals, time coefficients, multipoles (as the training run does).</summary>
-    private BasisSpectra Compute(double[] point)
+    /// <summary>One cosmology at this theory's redshift, cut from the calculator's values at every spec redshift.</summary>
+    private BasisSpectra Compute(double[] point, int index, CancellationToken cancellation)
     {
         TheoryBox.Check(this, point);
-        // One solver thread per cosmology: the points are already computed in parallel.
-        var model = CosmologyModel.Create(GridPoint.Cosmology(_spec, point), _spec.LinearSource, threads: 1);
-        var shape = _galaxy.Prepare(model.Linear);
-        var time = TimeCoefficientSolver.Solve(model.Background, model.Gravity, 1.0 / (1.0 + Redshift));
-        return _galaxy.Evaluate(shape, time).Basis;
+        double[] values = _calculator.Compute(point, index, cancellation);
+        int block = _calculator.Layout.Terms.Count * _spec.K.Count;
+        return new BasisSpectra(_calculator.Layout, [.. _spec.K], values.AsSpan(_redshiftIndex * block, block).ToArray());
     }
 }
